@@ -1,0 +1,8 @@
+/// <reference types="astro/client" />
+
+declare namespace App {
+  interface Locals {
+    /** SI or US customary, from the person's preference (a cookie until accounts carry it). */
+    unitSystem: import('./lib/preferences/unit-system').UnitSystem;
+  }
+}

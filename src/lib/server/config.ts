@@ -1,0 +1,24 @@
+import {
+  APP_MODE,
+  APP_URL,
+  BETTER_AUTH_SECRET,
+  DATABASE_URL,
+  MAIL_FROM,
+  MAIL_INBOX_URL,
+  MEILISEARCH_KEY,
+  MEILISEARCH_URL,
+  SMTP_URL,
+} from 'astro:env/server';
+
+/** The app's configuration, read once from astro:env (see README "Configuration"). */
+export const config = {
+  appUrl: APP_URL,
+  isDevelopment: APP_MODE === 'development',
+  databaseUrl: DATABASE_URL ?? null,
+  authSecret: BETTER_AUTH_SECRET ?? null,
+  smtpUrl: SMTP_URL,
+  mailFrom: MAIL_FROM,
+  mailInboxUrl: MAIL_INBOX_URL ?? null,
+  meilisearchUrl: MEILISEARCH_URL ?? null,
+  meilisearchKey: MEILISEARCH_KEY ?? null,
+} as const;
