@@ -115,25 +115,23 @@ async function main() {
   onCleanup(() => rmSync(runDir, { recursive: true, force: true }));
   const started = Date.now();
 
-  if (selected.has('lint')) runCheck('lint', bin('biome'), ['ci', '--colors=off', '.']);
-  if (selected.has('types')) runCheck('types', bin('astro'), ['check'], { ASTRO_TELEMETRY_DISABLED: '1' });
-
+  // Set-up first (it may install Debian packages), then the suites.
   const needsStack = ['db', 'api', 'browser'].some((suite) => selected.has(suite));
   const env = { CLAYBANK_TEST_ARTIFACTS: join(dataDir, 'test-artifacts') };
+  let stackUrls = null;
+  let secrets = null;
+  let mail = null;
   if (needsStack) {
     const database = `claybank_test_${process.pid}`;
     console.log(`\n• Test database ${database}`);
-    const secrets = localSecrets();
+    secrets = localSecrets();
     const { urls } = await stack.bringUpDatabase({ database, fresh: true, quiet: true });
+    stackUrls = urls;
     await dropStaleTestDatabases(databaseUrls(secrets, 'postgres').superUrl);
     onCleanup(() => dropDatabase(urls.superUrl, database));
     stack.migrate(urls.ownerUrl);
     stack.seed(urls.ownerUrl, { CLAYBANK_DEMO_SIGN_INS_FILE: join(runDir, 'demo-sign-ins.json') });
-    const mail = await stack.startMailFake({
-      smtpPort: await freePort(),
-      httpPort: await freePort(),
-      storeDir: join(runDir, 'mail'),
-    });
+    mail = await stack.startMailFake({ smtpPort: await freePort(), httpPort: await freePort(), storeDir: join(runDir, 'mail') });
     Object.assign(env, {
       CLAYBANK_TEST_DATABASE_URL: urls.appUrl,
       CLAYBANK_TEST_OWNER_URL: urls.ownerUrl,
@@ -141,32 +139,31 @@ async function main() {
       CLAYBANK_TEST_INBOX_URL: mail.inboxUrl,
       CLAYBANK_TEST_DEMO_SIGN_INS: join(runDir, 'demo-sign-ins.json'),
     });
-    if (selected.has('unit') || selected.has('db')) {
-      runVitest(
-        ['unit', 'db'].filter((p) => selected.has(p)),
-        env,
-      );
+  }
+  if (selected.has('browser')) ensureChromium();
+
+  if (selected.has('lint')) runCheck('lint', bin('biome'), ['ci', '--colors=off', '.']);
+  if (selected.has('types')) runCheck('types', bin('astro'), ['check'], { ASTRO_TELEMETRY_DISABLED: '1' });
+
+  const vitestFirst = ['unit', 'db'].filter((p) => selected.has(p) && (p === 'unit' || needsStack));
+  if (vitestFirst.length) runVitest(vitestFirst, env);
+
+  if (needsStack && (selected.has('api') || selected.has('browser'))) {
+    const outDir = join(dataDir, 'test-build');
+    try {
+      stack.buildApp(outDir);
+    } catch (error) {
+      record('build', 0, 1, error.message);
+      return finish(started);
     }
-    if (selected.has('api') || selected.has('browser')) {
-      if (selected.has('browser')) ensureChromium();
-      const outDir = join(dataDir, 'test-build');
-      try {
-        stack.buildApp(outDir);
-      } catch (error) {
-        record('build', 0, 1, error.message);
-        return finish(started);
-      }
-      const port = await freePort();
-      const appEnv = stack.appEnvironment({ port, appUrl: urls.appUrl, secrets, mail });
-      await stack.serveBuiltApp(outDir, appEnv, { quiet: true });
-      Object.assign(env, { CLAYBANK_TEST_BASE_URL: appEnv.APP_URL, CLAYBANK_TEST_BUILD_DIR: outDir });
-      runVitest(
-        ['api', 'browser'].filter((p) => selected.has(p)),
-        env,
-      );
-    }
-  } else if (selected.has('unit')) {
-    runVitest(['unit'], env);
+    const port = await freePort();
+    const appEnv = stack.appEnvironment({ port, appUrl: stackUrls.appUrl, secrets, mail });
+    await stack.serveBuiltApp(outDir, appEnv, { quiet: true });
+    Object.assign(env, { CLAYBANK_TEST_BASE_URL: appEnv.APP_URL, CLAYBANK_TEST_BUILD_DIR: outDir });
+    runVitest(
+      ['api', 'browser'].filter((p) => selected.has(p)),
+      env,
+    );
   }
   return finish(started);
 }
