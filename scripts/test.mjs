@@ -14,7 +14,7 @@ const { cleanup, onCleanup } = await import('./lib/children.mjs');
 const { RunbookError } = await import('./lib/errors.mjs');
 const { freePort } = await import('./lib/net.mjs');
 const { dropDatabase, dropStaleTestDatabases } = await import('./lib/provision.mjs');
-const { dataDir, databaseUrls, localSecrets } = await import('./lib/settings.mjs');
+const { dataDir, databaseUrls } = await import('./lib/settings.mjs');
 const stack = await import('./lib/stack.mjs');
 
 const SUITES = ['lint', 'types', 'unit', 'db', 'api', 'browser'];
@@ -124,8 +124,9 @@ async function main() {
   if (needsStack) {
     const database = `claybank_test_${process.pid}`;
     console.log(`\n• Test database ${database}`);
-    secrets = localSecrets();
-    const { urls } = await stack.bringUpDatabase({ database, fresh: true, quiet: true });
+    const up = await stack.bringUpDatabase({ database, fresh: true, quiet: true });
+    const urls = up.urls;
+    secrets = up.secrets;
     stackUrls = urls;
     await dropStaleTestDatabases(databaseUrls(secrets, 'postgres').superUrl);
     onCleanup(() => dropDatabase(urls.superUrl, database));

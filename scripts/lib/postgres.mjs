@@ -101,10 +101,11 @@ function serverUserCanReach(dir) {
  * postgres user cannot enter (a clone under /root), a folder under /var/lib/claybank.
  */
 export function clusterLocation() {
-  if (process.env.PG_DATA_DIR) return { dir: process.env.PG_DATA_DIR, relocated: false };
+  if (process.env.PG_DATA_DIR) return { dir: process.env.PG_DATA_DIR, secretsDir: dataDir, relocated: false };
   mkdirSync(dataDir, { recursive: true });
-  if (serverUserCanReach(dataDir)) return { dir: join(dataDir, 'postgres', 'data'), relocated: false };
-  return { dir: join('/var/lib/claybank', checkoutId, 'postgres', 'data'), relocated: true };
+  if (serverUserCanReach(dataDir)) return { dir: join(dataDir, 'postgres', 'data'), secretsDir: dataDir, relocated: false };
+  const base = join('/var/lib/claybank', checkoutId);
+  return { dir: join(base, 'postgres', 'data'), secretsDir: base, relocated: true };
 }
 
 function checkDiskSpace(dir) {

@@ -32,12 +32,13 @@ export const settings = {
 export const checkoutId = createHash('sha256').update(projectDir).digest('hex').slice(0, 10);
 
 /**
- * Local secrets (database passwords, auth secret), generated once per checkout and kept in the
- * git-ignored data folder. A real deployment supplies its own through the environment instead.
+ * Local secrets (database passwords, auth secret), generated once and kept beside the cluster they
+ * belong to (so a new clone in the same place still opens an old relocated cluster). A real
+ * deployment supplies its own through the environment instead.
  */
-export function localSecrets() {
-  mkdirSync(dataDir, { recursive: true });
-  const file = join(dataDir, 'local-secrets.json');
+export function localSecrets(folder = dataDir) {
+  mkdirSync(folder, { recursive: true });
+  const file = join(folder, 'local-secrets.json');
   if (existsSync(file)) return JSON.parse(readFileSync(file, 'utf8'));
   const make = () => randomBytes(24).toString('base64url');
   const secrets = { pgSuperPassword: make(), pgOwnerPassword: make(), pgAppPassword: make(), authSecret: make() + make() };

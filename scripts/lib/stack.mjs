@@ -23,9 +23,9 @@ const bin = (name) => join(projectDir, 'node_modules', '.bin', name);
 
 /** Starts (or reuses) the cluster, makes the roles and the database; stops the cluster on cleanup when we started it. */
 export async function bringUpDatabase({ database, fresh = false, quiet = false }) {
-  const secrets = localSecrets();
   const bins = findBinaries();
-  const { dir, relocated } = clusterLocation();
+  const { dir, secretsDir, relocated } = clusterLocation();
+  const secrets = localSecrets(secretsDir);
   const created = ensureCluster(bins, dir, secrets.pgSuperPassword);
   if (!quiet || relocated) {
     const where = relocated ? `${dir} (outside the checkout: the postgres user cannot enter ${projectDir})` : dir;
