@@ -57,6 +57,9 @@ function printBanner(inboxUrl) {
 
 await runMain(async () => {
   takeStartLock();
+  await stack.assertPortFree(settings.appPort, 'PORT', 'app');
+  await stack.assertPortFree(settings.smtpPort, 'MAIL_FAKE_SMTP_PORT', 'mail fake (SMTP)');
+  await stack.assertPortFree(settings.mailHttpPort, 'MAIL_FAKE_HTTP_PORT', 'mail fake (inbox)');
   const { urls, secrets } = await stack.bringUpDatabase({ database: settings.database });
   stack.migrate(urls.ownerUrl);
   stack.seed(urls.ownerUrl, { CLAYBANK_DEMO_SIGN_INS_FILE: join(dataDir, 'demo-sign-ins.json') });

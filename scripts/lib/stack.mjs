@@ -64,7 +64,7 @@ export function seed(ownerUrl, extraEnv = {}) {
   runTsx('scripts/seed.ts', { DATABASE_OWNER_URL: ownerUrl, ...extraEnv }, 'Loading the demo scenario');
 }
 
-async function assertPortFree(port, variable, what) {
+export async function assertPortFree(port, variable, what) {
   if (await portInUse(port)) {
     throw new RunbookError(
       `Port ${port} on 127.0.0.1 is already in use, so the ${what} cannot start there.\n` +
