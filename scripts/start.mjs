@@ -45,8 +45,8 @@ function printBanner(inboxUrl) {
   const people = demoSignIns();
   const lines = ['', `  Claybank is running${dev ? ' (astro dev)' : ''}:  ${url}`, ''];
   if (people.length) {
-    lines.push('  Demo sign-ins (invented people; development only):');
-    for (const person of people) lines.push(`    ${person.role.padEnd(22)} ${person.email.padEnd(40)} ${person.password}`);
+    lines.push(`  Demo sign-ins (invented people; development only), password for all: ${people[0].password}`);
+    for (const person of people) lines.push(`    ${person.email.padEnd(38)} ${person.role}`);
   } else {
     lines.push('  Demo sign-ins: none yet.');
   }
@@ -62,7 +62,7 @@ await runMain(async () => {
   await stack.assertPortFree(settings.mailHttpPort, 'MAIL_FAKE_HTTP_PORT', 'mail fake (inbox)');
   const { urls, secrets } = await stack.bringUpDatabase({ database: settings.database });
   stack.migrate(urls.ownerUrl);
-  stack.seed(urls.ownerUrl, { CLAYBANK_DEMO_SIGN_INS_FILE: join(dataDir, 'demo-sign-ins.json') });
+  stack.seed({ appUrl: urls.appUrl, secrets, port: settings.appPort, signInsFile: join(dataDir, 'demo-sign-ins.json') });
   const mail = await stack.startMailFake({
     smtpPort: settings.smtpPort,
     httpPort: settings.mailHttpPort,

@@ -131,7 +131,7 @@ async function main() {
     await dropStaleTestDatabases(databaseUrls(secrets, 'postgres').superUrl);
     onCleanup(() => dropDatabase(urls.superUrl, database));
     stack.migrate(urls.ownerUrl);
-    stack.seed(urls.ownerUrl, { CLAYBANK_DEMO_SIGN_INS_FILE: join(runDir, 'demo-sign-ins.json') });
+    stack.seed({ appUrl: urls.appUrl, secrets, port: 4321, signInsFile: join(runDir, 'demo-sign-ins.json') });
     mail = await stack.startMailFake({ smtpPort: await freePort(), httpPort: await freePort(), storeDir: join(runDir, 'mail') });
     Object.assign(env, {
       CLAYBANK_TEST_DATABASE_URL: urls.appUrl,
@@ -160,7 +160,11 @@ async function main() {
     const port = await freePort();
     const appEnv = stack.appEnvironment({ port, appUrl: stackUrls.appUrl, secrets, mail });
     await stack.serveBuiltApp(outDir, appEnv, { quiet: true });
-    Object.assign(env, { CLAYBANK_TEST_BASE_URL: appEnv.APP_URL, CLAYBANK_TEST_BUILD_DIR: outDir });
+    Object.assign(env, {
+      CLAYBANK_TEST_BASE_URL: appEnv.APP_URL,
+      CLAYBANK_TEST_BUILD_DIR: outDir,
+      CLAYBANK_TEST_AUTH_SECRET: secrets.authSecret,
+    });
     runVitest(
       ['api', 'browser'].filter((p) => selected.has(p)),
       env,

@@ -4,5 +4,7 @@ declare namespace App {
   interface Locals {
     /** SI or US customary, from the person's preference (a cookie until accounts carry it). */
     unitSystem: import('./lib/preferences/unit-system').UnitSystem;
+    /** The signed-in person, their permissions context and firms; null when signed out. */
+    identity: import('./lib/server/auth/resolve-actor').ResolvedIdentity | null;
   }
 }

@@ -60,8 +60,18 @@ export function migrate(ownerUrl) {
   runTsx('scripts/migrate.ts', { DATABASE_OWNER_URL: ownerUrl }, 'Database migration');
 }
 
-export function seed(ownerUrl, extraEnv = {}) {
-  runTsx('scripts/seed.ts', { DATABASE_OWNER_URL: ownerUrl, ...extraEnv }, 'Loading the demo scenario');
+/** Loads the invented demo scenario through the app's own services, as the app role. */
+export function seed({ appUrl, secrets, port, signInsFile }) {
+  runTsx(
+    'scripts/seed.ts',
+    {
+      DATABASE_URL: appUrl,
+      BETTER_AUTH_SECRET: secrets.authSecret,
+      APP_URL: `http://127.0.0.1:${port}`,
+      CLAYBANK_DEMO_SIGN_INS_FILE: signInsFile,
+    },
+    'Loading the demo scenario',
+  );
 }
 
 export async function assertPortFree(port, variable, what) {
@@ -159,12 +169,12 @@ export function appEnvironment({ port, appUrl, secrets, mail, mode = 'developmen
   };
 }
 
-/** Serves the built app (node adapter, standalone) with NODE_ENV=production. */
+/** Serves the built app (node adapter's standalone handler, through scripts/serve.mjs) with NODE_ENV=production. */
 export async function serveBuiltApp(outDir, env, { quiet = false } = {}) {
   await assertPortFree(Number(env.PORT), 'PORT', 'app');
-  const child = startChild('app', process.execPath, [join(outDir, 'server', 'entry.mjs')], {
+  const child = startChild('app', process.execPath, [join(projectDir, 'scripts', 'serve.mjs')], {
     cwd: projectDir,
-    env: { ...process.env, ...env, NODE_ENV: 'production' },
+    env: { ...process.env, ...env, NODE_ENV: 'production', CLAYBANK_BUILD_DIR: outDir },
     quiet,
   });
   await waitForPort(Number(env.PORT), 30_000, 'The app server');

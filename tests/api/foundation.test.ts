@@ -21,9 +21,10 @@ describe('GET /api/health', () => {
   it('answers 503 when the database is down, without leaking connection details', async () => {
     // A second server from the same build, pointed at a port where no database listens.
     const port = 40000 + Math.floor(Math.random() * 20000);
-    const server = spawn(process.execPath, [join(testEnv('CLAYBANK_TEST_BUILD_DIR'), 'server/entry.mjs')], {
+    const server = spawn(process.execPath, [join(import.meta.dirname, '../../scripts/serve.mjs')], {
       env: {
         ...process.env,
+        CLAYBANK_BUILD_DIR: testEnv('CLAYBANK_TEST_BUILD_DIR'),
         NODE_ENV: 'production',
         HOST: '127.0.0.1',
         PORT: String(port),

@@ -37,7 +37,6 @@ describe('the shell in a real browser', () => {
       ['Contribute', '/contribute'],
       ['Review', '/review'],
       ['Estimates', '/estimates'],
-      ['Firm settings', '/firm'],
     ] as const) {
       await page.goto(`${baseUrl}/`);
       await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: label }).click();
@@ -47,6 +46,14 @@ describe('the shell in a real browser', () => {
       expect(await page.locator(`nav a[aria-current="page"]`).textContent()).toContain(label);
     }
     await screenshot(page, 'empty-state-estimates');
+  });
+
+  it('sends a signed-out visitor from Firm settings to sign in, and back afterwards', async () => {
+    const { page } = session;
+    await page.goto(`${baseUrl}/`);
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Firm settings' }).click();
+    await page.waitForURL(`${baseUrl}/sign-in?next=/firm`);
+    await expect(page.getByRole('heading', { level: 1 }).textContent()).resolves.toBe('Sign in');
   });
 
   it('switches to US customary units and remembers it on the server', async () => {

@@ -1,11 +1,6 @@
+import { type AppContext, buildAppContext } from './build-context';
 import { config } from './config';
-import { connectDatabase, type DatabaseHandle } from './db/connect';
-import { createMailer, type Mailer } from './mail/mailer';
-
-interface AppContext {
-  database: DatabaseHandle;
-  mailer: Mailer;
-}
+import { createMailer } from './mail/mailer';
 
 const holder = globalThis as typeof globalThis & { __claybank?: AppContext };
 
@@ -16,15 +11,19 @@ export class MissingConfigurationError extends Error {
   }
 }
 
-/** The process-wide database pool and mailer, created on first use. */
+/** The process-wide database pool, auth and mailer, created on first use. */
 export function appContext(): AppContext {
   if (holder.__claybank) return holder.__claybank;
   if (!config.databaseUrl) throw new MissingConfigurationError('DATABASE_URL');
-  holder.__claybank = {
-    database: connectDatabase(config.databaseUrl),
+  if (!config.authSecret) throw new MissingConfigurationError('BETTER_AUTH_SECRET');
+  holder.__claybank = buildAppContext({
+    databaseUrl: config.databaseUrl,
+    appUrl: config.appUrl,
+    authSecret: config.authSecret,
     mailer: createMailer(config.smtpUrl, config.mailFrom),
-  };
+  });
   return holder.__claybank;
 }
 
 export const db = () => appContext().database.db;
+export const auth = () => appContext().auth;

@@ -1,4 +1,6 @@
 import type { ColumnType, Insertable, Selectable, Updateable } from 'kysely';
+import type { AuthTables } from './auth-tables';
+import type { BankTables } from './bank-tables';
 
 /** Timestamps come back as Date and may be written as Date or ISO string. */
 export type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
@@ -10,7 +12,7 @@ export interface AppSettingTable {
 }
 
 /** Every table the app reads or writes, by name. */
-export interface Database {
+export interface Database extends AuthTables, BankTables {
   app_setting: AppSettingTable;
 }
 

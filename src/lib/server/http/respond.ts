@@ -67,3 +67,12 @@ export async function readJsonBody<T extends z.ZodType>(request: Request, schema
   }
   return parsed.data;
 }
+
+/** Validates a URL's query string; throws ApiError (400) with per-parameter issues. */
+export function readQuery<T extends z.ZodType>(url: URL, schema: T): z.infer<T> {
+  const parsed = schema.safeParse(Object.fromEntries(url.searchParams));
+  if (!parsed.success) {
+    throw new ApiError('VALIDATION_FAILED', 'Some query parameters are invalid; see issues.', issuesFromZod(parsed.error));
+  }
+  return parsed.data;
+}

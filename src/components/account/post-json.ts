@@ -1,0 +1,62 @@
+/** One problem with one field, as the API reports it (`path` is dotted, empty for the whole body). */
+export interface FieldIssue {
+  path: string;
+  message: string;
+}
+
+export interface ApiFailure {
+  status: number;
+  code: string;
+  message: string;
+  issues: FieldIssue[];
+}
+
+export type ApiResult<T> = { ok: true; status: number; data: T } | { ok: false; failure: ApiFailure };
+
+const UNREACHABLE: ApiFailure = {
+  status: 0,
+  code: 'NETWORK',
+  message: 'Could not reach Claybank. Check your connection and try again.',
+  issues: [],
+};
+
+function failureFrom(status: number, body: unknown): ApiFailure {
+  const error = (body as { error?: Partial<ApiFailure> } | null)?.error;
+  return {
+    status,
+    code: typeof error?.code === 'string' ? error.code : 'UNKNOWN',
+    message:
+      typeof error?.message === 'string'
+        ? error.message
+        : `The server refused the request (HTTP ${status}). Try again in a moment.`,
+    issues: Array.isArray(error?.issues) ? error.issues : [],
+  };
+}
+
+/** Calls one of Claybank's JSON endpoints on this origin and returns its data or its error, never throwing. */
+export async function requestJson<T = unknown>(method: string, url: string, body?: unknown): Promise<ApiResult<T>> {
+  let response: Response;
+  try {
+    response = await fetch(url, {
+      method,
+      credentials: 'same-origin',
+      headers:
+        body === undefined ? { accept: 'application/json' } : { accept: 'application/json', 'content-type': 'application/json' },
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
+  } catch {
+    return { ok: false, failure: UNREACHABLE };
+  }
+  const text = await response.text();
+  let parsed: unknown = null;
+  try {
+    parsed = text ? JSON.parse(text) : null;
+  } catch {
+    parsed = null;
+  }
+  if (!response.ok) return { ok: false, failure: failureFrom(response.status, parsed) };
+  return { ok: true, status: response.status, data: parsed as T };
+}
+
+export const getJson = <T>(url: string) => requestJson<T>('GET', url);
+export const postJson = <T>(url: string, body: unknown = {}) => requestJson<T>('POST', url, body);

@@ -1,0 +1,36 @@
+import { z } from 'zod';
+
+/** Regions and geological units, as stewards curate them. */
+export const GENESIS_VALUES = [
+  'marine',
+  'estuarine',
+  'lacustrine',
+  'glaciolacustrine',
+  'glacial',
+  'alluvial',
+  'fluvial',
+  'organic',
+  'residual',
+  'aeolian',
+  'colluvial',
+  'other',
+] as const;
+
+const name = z
+  .string({ error: 'Enter a name.' })
+  .trim()
+  .min(2, 'Use at least 2 characters.')
+  .max(80, 'Use at most 80 characters.');
+const description = z.string().trim().max(2000, 'Use at most 2,000 characters.').nullable().optional();
+
+export const createRegionSchema = z.strictObject({ name, description });
+export const updateRegionSchema = z.strictObject({ name: name.optional(), description });
+
+export const createUnitSchema = z.strictObject({
+  name,
+  description,
+  genesis: z.enum(GENESIS_VALUES, { error: `Choose one of: ${GENESIS_VALUES.join(', ')}.` }),
+  age: z.string().trim().max(60, 'Use at most 60 characters.').nullable().optional(),
+  typicalRegionId: z.uuid({ error: 'Choose a region from the list.' }).nullable().optional(),
+});
+export const updateUnitSchema = createUnitSchema.partial();
