@@ -275,3 +275,18 @@ export function unregisterUser() {
   }
   return others;
 }
+
+const startedMarker = join(dataDir, 'postgres-started-by-claybank');
+
+/** Notes that a Claybank command (not the person, not another tool) started the running cluster. */
+export function markStartedByUs() {
+  mkdirSync(usersDir, { recursive: true });
+  writeFileSync(startedMarker, String(process.pid));
+}
+
+/** True (and forgets it) when a Claybank command started the running cluster. */
+export function takeStartedByUs() {
+  if (!existsSync(startedMarker)) return false;
+  rmSync(startedMarker, { force: true });
+  return true;
+}

@@ -11,9 +11,11 @@ import {
   clusterLocation,
   ensureCluster,
   findBinaries,
+  markStartedByUs,
   registerUser,
   startCluster,
   stopCluster,
+  takeStartedByUs,
   unregisterUser,
 } from './postgres.mjs';
 import { ensureDatabase, ensureRoles } from './provision.mjs';
@@ -33,13 +35,17 @@ export async function bringUpDatabase({ database, fresh = false, quiet = false }
   }
   registerUser();
   const { started } = await startCluster(bins, dir);
+  if (started) markStartedByUs();
   onCleanup(() => {
     const others = unregisterUser();
-    if (started && others === 0) {
+    // The last Claybank command out stops the cluster if one of them started it.
+    if (others === 0 && takeStartedByUs()) {
       stopCluster(bins, dir);
       console.log('• PostgreSQL stopped.');
     } else if (started) {
-      console.log(`• PostgreSQL left running: ${others} other Claybank command(s) of this checkout still use it.`);
+      console.log(
+        `• PostgreSQL left running: ${others} other Claybank command(s) of this checkout still use it; the last one stops it.`,
+      );
     }
   });
   if (!quiet) console.log(`• PostgreSQL ${started ? 'started' : 'already running'} on 127.0.0.1:${settings.pgPort}`);
