@@ -188,8 +188,8 @@ function logFile(dir) {
   return join(dirname(dir), 'server.log');
 }
 
-function isReady(bins) {
-  return run(bins.pgIsReady, ['-q', '-h', settings.host, '-p', String(settings.pgPort)]).status === 0;
+function isReady(bins, port = settings.pgPort) {
+  return run(bins.pgIsReady, ['-q', '-h', settings.host, '-p', String(port)]).status === 0;
 }
 
 function runningPid(dir) {
@@ -210,27 +210,27 @@ function runningPid(dir) {
  * Starts the cluster on 127.0.0.1:PG_PORT. Returns { started } — false when it was already running
  * (another `npm start` or `npm test` of this checkout), so the caller knows whether to stop it.
  */
-export async function startCluster(bins, dir) {
+export async function startCluster(bins, dir, port = settings.pgPort) {
   const running = runningPid(dir);
-  if (running && running.port === settings.pgPort && isReady(bins)) return { started: false };
-  if (running && running.port !== settings.pgPort) {
+  if (running && running.port === port && isReady(bins, port)) return { started: false };
+  if (running && running.port !== port) {
     throw new RunbookError(
-      `This checkout's database is already running on port ${running.port} (pid ${running.pid}), not on PG_PORT=${settings.pgPort}.\n` +
+      `This checkout's database is already running on port ${running.port} (pid ${running.pid}), not on PG_PORT=${port}.\n` +
         '  Stop the other run first (Ctrl-C in its terminal), or use the same PG_PORT.',
     );
   }
-  if (await portInUse(settings.pgPort)) {
+  if (await portInUse(port)) {
     throw new RunbookError(
-      `Port ${settings.pgPort} on 127.0.0.1 is already in use by another program, so the database cannot start there.\n` +
+      `Port ${port} on 127.0.0.1 is already in use by another program, so the database cannot start there.\n` +
         `  Choose another port, e.g.:  PG_PORT=54339 npm start   (and the same PG_PORT for npm test).`,
     );
   }
   checkDiskSpace(dir);
-  const options = `-p ${settings.pgPort} -c listen_addresses=${settings.host} -c unix_socket_directories=''`;
+  const options = `-p ${port} -c listen_addresses=${settings.host} -c unix_socket_directories=''`;
   let lastOutput = '';
   for (let attempt = 0; attempt < 10; attempt++) {
     const result = runAsServerUser(bins.pgCtl, ['-D', dir, '-l', logFile(dir), '-w', '-t', '30', '-o', options, 'start']);
-    if (result.status === 0 && isReady(bins)) return { started: true };
+    if (result.status === 0 && isReady(bins, port)) return { started: true };
     lastOutput = `${result.stdout}${result.stderr}`;
     await new Promise((r) => setTimeout(r, 700));
   }
@@ -241,14 +241,14 @@ export async function startCluster(bins, dir) {
     );
   }
   if (/could not bind|Address already in use/i.test(log + lastOutput)) {
-    throw new RunbookError(`Port ${settings.pgPort} is in use; set PG_PORT to a free port and try again.`);
+    throw new RunbookError(`Port ${port} is in use; set PG_PORT to a free port and try again.`);
   }
   throw new RunbookError(`The database did not start. Last lines of ${logFile(dir)}:\n${log}\n${lastOutput}`);
 }
 
-export function stopCluster(bins, dir) {
+export function stopCluster(bins, dir, mode = 'fast') {
   if (!runningPid(dir)) return;
-  runAsServerUser(bins.pgCtl, ['-D', dir, '-m', 'fast', '-w', '-t', '30', 'stop']);
+  runAsServerUser(bins.pgCtl, ['-D', dir, '-m', mode, '-w', '-t', '30', 'stop']);
 }
 
 // Several commands of one checkout (npm start, npm test) may share the cluster. Each registers

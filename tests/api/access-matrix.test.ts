@@ -4,7 +4,7 @@
 // source: OWASP ASVS 5.0 §8.2.2, §8.4.1 (per-object and cross-tenant authorisation); OWASP IDOR
 // prevention cheat sheet ("user A / user B" testing).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { type FirmFixture, makeFirmFixture, PRIVATE_MARKERS } from './support/fixtures';
+import { type FirmFixture, makeFirmFixture, makeSubmittedSubmission, PRIVATE_MARKERS } from './support/fixtures';
 import { type Expectation, everyone, FIRM_OF, ROLE_EMAILS, ROLES, type Role } from './support/roles';
 import { routeInventory } from './support/route-inventory';
 import { type CallResult, call, db, firmIdOf, makePerson, memberIdOf, sessionCookie, userIdOf } from './support/world';
@@ -46,9 +46,11 @@ const PREVIEW_BODY = {
   drainage: { top: 'pervious', bottom: 'pervious' },
 };
 
+type Request = { method: string; path: string; body?: unknown; headers?: Record<string, string> };
 type Case = {
   context: string;
-  request: () => { method: string; path: string; body?: unknown; headers?: Record<string, string> };
+  /** may build a fresh target per call (for one-shot actions such as a decision or a withdrawal) */
+  request: (role: Role) => Request | Promise<Request>;
   expect: Record<Role, Expectation>;
 };
 const get = (path: () => string) => () => ({ method: 'GET', path: path() });
@@ -469,6 +471,68 @@ const MATRIX: Record<string, Case[]> = {
       }),
     },
   ],
+  'GET /api/review': [
+    {
+      context: 'review queue (all firms)',
+      request: get(() => '/api/review'),
+      expect: everyone(403, {
+        anon: 401,
+        steward: {
+          status: 200,
+          check: (r) =>
+            expect(listOf(r, 'submissions').map((s) => s.id)).toEqual(expect.arrayContaining([A.submissionId, B.submissionId])),
+        },
+      }),
+    },
+  ],
+  'GET /api/review/:id': [
+    {
+      context: 'firm A submission, as reviewed (no private details)',
+      request: get(() => `/api/review/${A.submissionId}`),
+      expect: everyone(403, {
+        anon: 401,
+        steward: { status: 200, check: (r) => expect(ids(r, 'records')).toEqual(expect.arrayContaining([A.unpublishedId])) },
+      }),
+    },
+  ],
+  'POST /api/review/:id/decision': [
+    {
+      context: 'a fresh firm A submission, returned with a comment',
+      request: async () => ({
+        method: 'POST',
+        path: `/api/review/${await makeSubmittedSubmission(A.firmId)}/decision`,
+        body: { action: 'return', comment: 'Check the units of σ′p.' },
+      }),
+      expect: everyone(403, { anon: 401, steward: 200 }),
+    },
+  ],
+  'GET /api/submissions/:id': [
+    {
+      context: 'firm A submission in full',
+      request: get(() => `/api/submissions/${A.submissionId}`),
+      expect: everyone(403, {
+        anon: 401,
+        aOwner: { status: 200, check: (r) => expect(r.text).toContain(PRIVATE_MARKERS.A.project) },
+        aEngineer: 200,
+        aContributor: 200,
+        bAdmin: 404,
+      }),
+    },
+  ],
+  'POST /api/submissions/:id/resubmit': [
+    {
+      context: 'firm A submission that is not returned',
+      request: () => ({ method: 'POST', path: `/api/submissions/${A.submissionId}/resubmit` }),
+      expect: everyone(403, { anon: 401, aOwner: 409, aEngineer: 409, aContributor: 409, bAdmin: 404 }),
+    },
+  ],
+  'POST /api/submissions/:id/withdraw': [
+    {
+      context: 'a fresh firm A submission',
+      request: async () => ({ method: 'POST', path: `/api/submissions/${await makeSubmittedSubmission(A.firmId)}/withdraw` }),
+      expect: everyone(403, { anon: 401, aOwner: 200, aEngineer: 200, aContributor: 200, bAdmin: 404 }),
+    },
+  ],
   'GET /api/audit': [
     {
       context: 'own firm; platform admin sees all',
@@ -615,7 +679,7 @@ describe('access matrix', () => {
         const failures: string[] = [];
         for (const role of order) {
           const expectation = testCase.expect[role];
-          const request = testCase.request();
+          const request = await testCase.request(role);
           const result = await call(
             request.method,
             request.path,

@@ -15,7 +15,19 @@ afterAll(() => db.destroy());
 const PROFILE = {
   unitSystem: 'SI',
   waterTableDepth: 0,
-  layers: [{ name: 'Estuarine clay', thickness: 10, unitWeightAboveWater: 16, unitWeightBelowWater: 16, cc: 0.9, cr: 0.09, e0: 2.2, ocr: 1, cv: 1.5 }],
+  layers: [
+    {
+      name: 'Estuarine clay',
+      thickness: 10,
+      unitWeightAboveWater: 16,
+      unitWeightBelowWater: 16,
+      cc: 0.9,
+      cr: 0.09,
+      e0: 2.2,
+      ocr: 1,
+      cv: 1.5,
+    },
+  ],
   load: { type: 'wideFill', pressure: 50 },
   drainage: { top: 'pervious', bottom: 'pervious' },
 };
@@ -64,7 +76,10 @@ describe('POST /api/estimates/preview', () => {
     const firmId = await firmIdOf('quillfen');
     const count = () =>
       inTenantTransaction(db, { firmId, platformRole: 'user' }, (trx) =>
-        trx.selectFrom('estimate').select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow(),
+        trx
+          .selectFrom('estimate')
+          .select((eb) => eb.fn.countAll<number>().as('n'))
+          .executeTakeFirstOrThrow(),
       );
     const saved = await call('POST', '/api/estimates', engineer, { name: 'Preview check', unitSystem: 'SI', input: PROFILE });
     expect(saved.status).toBe(201);

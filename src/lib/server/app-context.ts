@@ -21,6 +21,7 @@ export function appContext(): AppContext {
     appUrl: config.appUrl,
     authSecret: config.authSecret,
     mailer: createMailer(config.smtpUrl, config.mailFrom),
+    startOutbox: true,
   });
   return holder.__claybank;
 }

@@ -6,12 +6,15 @@ import { databaseRateLimiter, type RateLimitStorage } from './auth/rate-limit';
 import { connectDatabase, type DatabaseHandle } from './db/connect';
 import type { Database } from './db/schema';
 import type { Mailer } from './mail/mailer';
+import { type OutboxWorker, startOutboxWorker } from './mail/outbox';
 
 export interface AppContext {
   database: DatabaseHandle;
   mailer: Mailer;
   auth: Auth;
   rateLimiter: RateLimitStorage;
+  /** delivers queued mail; running only in the app server, not in scripts and tests */
+  outbox: OutboxWorker | null;
 }
 
 /** Wires auth to the database, mail and audit log; shared by the app and by scripts that seed or test. */
@@ -21,6 +24,7 @@ export function buildAppContext(options: {
   authSecret: string;
   mailer: Mailer;
   extraPlugins?: AuthDependencies['extraPlugins'];
+  startOutbox?: boolean;
 }): AppContext {
   const database = connectDatabase(options.databaseUrl);
   const db: Kysely<Database> = database.db;
@@ -38,5 +42,6 @@ export function buildAppContext(options: {
     },
     extraPlugins: options.extraPlugins,
   });
-  return { database, mailer: options.mailer, auth, rateLimiter };
+  const outbox = options.startOutbox ? startOutboxWorker(db, options.mailer) : null;
+  return { database, mailer: options.mailer, auth, rateLimiter, outbox };
 }

@@ -108,3 +108,35 @@ export async function makeFirmFixture(
   });
   return fixture;
 }
+
+/** A submitted (not yet reviewed) submission of the firm with one pending record, for one-shot actions. */
+export async function makeSubmittedSubmission(firmId: string): Promise<string> {
+  const { regionId, unitId } = await vocabulary();
+  return inTenantTransaction(db, { firmId, platformRole: 'user' }, async (trx) => {
+    const submission = await trx
+      .insertInto('submission')
+      .values({
+        firm_id: firmId,
+        submitted_by: null,
+        source_kind: 'seed',
+        status: 'submitted',
+        row_count: 1,
+        submitted_at: new Date(),
+      })
+      .returning('id')
+      .executeTakeFirstOrThrow();
+    await trx
+      .insertInto('test_record')
+      .values({
+        submission_id: submission.id,
+        firm_id: firmId,
+        region_id: regionId,
+        geological_unit_id: unitId,
+        depth_top_m: 4,
+        depth_bottom_m: 4.5,
+        compression_index: 0.7,
+      })
+      .execute();
+    return submission.id;
+  });
+}

@@ -149,8 +149,19 @@ export interface TestRecordTable {
   permeability_m_per_s: number | null;
   delta_e_over_e0: number | null;
   sample_quality_class: SampleQualityClass | null;
+  /** the steward's comment when the record was returned (migration 20261202T0300) */
+  review_comment: string | null;
+  /** flags raised on import for the steward: [{ field, reason }] */
+  import_flags: ColumnType<ImportFlag[], string | undefined, string>;
+  /** row of the uploaded file the record came from */
+  row_number: number | null;
   created_at: Timestamp;
   updated_at: Timestamp;
+}
+
+export interface ImportFlag {
+  field: string;
+  reason: string;
 }
 
 export interface TestRecordStressLevelTable {

@@ -1,0 +1,125 @@
+import type { ImportFlag, SampleQualityClass, TestMethod, UscsSymbol } from '../db/bank-tables';
+
+/** The shared (anonymised) values of one record, in the bank's columns and units. */
+export interface SharedValues {
+  region_id: string;
+  geological_unit_id: string;
+  location_cell: string | null;
+  depth_top_m: number;
+  depth_bottom_m: number;
+  uscs_symbol: UscsSymbol | null;
+  sampling_method: string | null;
+  water_content_pct: number | null;
+  liquid_limit_pct: number | null;
+  plastic_limit_pct: number | null;
+  plasticity_index_pct: number | null;
+  specific_gravity: number | null;
+  bulk_unit_weight_kn_per_m3: number | null;
+  initial_void_ratio: number | null;
+  organic_content_pct: number | null;
+  test_method: TestMethod | null;
+  test_standard: string | null;
+  compression_index: number | null;
+  recompression_index: number | null;
+  preconsolidation_stress_kpa: number | null;
+  vertical_effective_stress_kpa: number | null;
+  overconsolidation_ratio: number | null;
+  cv_nc_m2_per_year: number | null;
+  cv_oc_m2_per_year: number | null;
+  secondary_compression_index: number | null;
+  mv_m2_per_mn: number | null;
+  permeability_m_per_s: number | null;
+  delta_e_over_e0: number | null;
+  sample_quality_class: SampleQualityClass | null;
+}
+
+/** The firm-private values of one record. */
+export interface PrivateValues {
+  project_name: string | null;
+  client_name: string | null;
+  borehole_id: string | null;
+  sample_id: string | null;
+  easting_m: number | null;
+  northing_m: number | null;
+  latitude_deg: number | null;
+  longitude_deg: number | null;
+  coordinate_system: string | null;
+  notes: string | null;
+}
+
+/** One load increment of the raw oedometer readings. */
+export interface IncrementToStore {
+  incrementNo: number;
+  appliedStressKpa: number;
+  isUnloading: boolean;
+  durationHours: number | null;
+  endDeformationMm: number | null;
+  endVoidRatio: number | null;
+  specimenHeightMm: number | null;
+}
+
+/** One validated, anonymised row of an upload, ready to store. */
+export interface RecordToStore {
+  rowNumber: number;
+  shared: SharedValues;
+  private: PrivateValues;
+  increments: IncrementToStore[];
+  flags: ImportFlag[];
+}
+
+export const SHARED_COLUMNS: readonly { name: keyof SharedValues; type: string }[] = [
+  { name: 'region_id', type: 'uuid' },
+  { name: 'geological_unit_id', type: 'uuid' },
+  { name: 'location_cell', type: 'text' },
+  { name: 'depth_top_m', type: 'numeric' },
+  { name: 'depth_bottom_m', type: 'numeric' },
+  { name: 'uscs_symbol', type: 'text' },
+  { name: 'sampling_method', type: 'text' },
+  { name: 'water_content_pct', type: 'numeric' },
+  { name: 'liquid_limit_pct', type: 'numeric' },
+  { name: 'plastic_limit_pct', type: 'numeric' },
+  { name: 'plasticity_index_pct', type: 'numeric' },
+  { name: 'specific_gravity', type: 'numeric' },
+  { name: 'bulk_unit_weight_kn_per_m3', type: 'numeric' },
+  { name: 'initial_void_ratio', type: 'numeric' },
+  { name: 'organic_content_pct', type: 'numeric' },
+  { name: 'test_method', type: 'text' },
+  { name: 'test_standard', type: 'text' },
+  { name: 'compression_index', type: 'numeric' },
+  { name: 'recompression_index', type: 'numeric' },
+  { name: 'preconsolidation_stress_kpa', type: 'numeric' },
+  { name: 'vertical_effective_stress_kpa', type: 'numeric' },
+  { name: 'overconsolidation_ratio', type: 'numeric' },
+  { name: 'cv_nc_m2_per_year', type: 'numeric' },
+  { name: 'cv_oc_m2_per_year', type: 'numeric' },
+  { name: 'secondary_compression_index', type: 'numeric' },
+  { name: 'mv_m2_per_mn', type: 'numeric' },
+  { name: 'permeability_m_per_s', type: 'numeric' },
+  { name: 'delta_e_over_e0', type: 'numeric' },
+  { name: 'sample_quality_class', type: 'integer' },
+];
+
+export const PRIVATE_COLUMNS: readonly { name: keyof PrivateValues; type: string }[] = [
+  { name: 'project_name', type: 'text' },
+  { name: 'client_name', type: 'text' },
+  { name: 'borehole_id', type: 'text' },
+  { name: 'sample_id', type: 'text' },
+  { name: 'easting_m', type: 'numeric' },
+  { name: 'northing_m', type: 'numeric' },
+  { name: 'latitude_deg', type: 'numeric' },
+  { name: 'longitude_deg', type: 'numeric' },
+  { name: 'coordinate_system', type: 'text' },
+  { name: 'notes', type: 'text' },
+];
+
+/** The key that finds the same test in two uploads: borehole, sample and depths. */
+export function duplicateKey(
+  boreholeId: string | null,
+  sampleId: string | null,
+  depthTopM: number,
+  depthBottomM: number,
+): string {
+  return [boreholeId ?? '', sampleId ?? '', depthTopM.toFixed(3), depthBottomM.toFixed(3)]
+    .map((part) => part.toLowerCase())
+    .join('|');
+}
