@@ -4,11 +4,13 @@
 //   DATABASE_URL=… BETTER_AUTH_SECRET=… APP_URL=… tsx scripts/seed.ts
 import { writeFileSync } from 'node:fs';
 import { buildAppContext } from '../src/lib/server/build-context';
+import { inTenantTransaction } from '../src/lib/server/tenancy/tenant-transaction';
 import { DEMO_PASSWORD, DEMO_PEOPLE } from './demo/people';
 import { seedPeople } from './demo/seed-people';
+import { seedRecords } from './demo/seed-records';
 import { seedVocabulary } from './demo/seed-vocabulary';
 
-const SCENARIO = { name: 'Saltreach (invented)', version: 2 };
+const SCENARIO = { name: 'Saltreach (invented)', version: 3 };
 
 function required(name: string): string {
   const value = process.env[name];
@@ -34,6 +36,11 @@ if (loaded?.version === SCENARIO.version) {
 } else {
   await seedPeople(ctx);
   await seedVocabulary(db);
+  const already = await inTenantTransaction(db, { firmId: null, platformRole: 'steward' }, (trx) =>
+    trx.selectFrom('submission').select('id').limit(1).executeTakeFirst(),
+  );
+  const bank = already ? null : await seedRecords(ctx);
+  if (bank) console.log(`  demo bank: ${bank.records} invented test records in ${bank.submissions} submissions`);
   const value = JSON.stringify({ ...SCENARIO, loadedAt: new Date().toISOString() });
   await db
     .insertInto('app_setting')

@@ -4,7 +4,7 @@
 // source: OWASP ASVS 5.0 §8.2.2, §8.4.1 (per-object and cross-tenant authorisation); OWASP IDOR
 // prevention cheat sheet ("user A / user B" testing).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { type FirmFixture, makeFirmFixture, makeSubmittedSubmission, PRIVATE_MARKERS } from './support/fixtures';
+import { type FirmFixture, makeFirmFixture, makeSubmittedSubmission, PRIVATE_MARKERS, uploadForm } from './support/fixtures';
 import { type Expectation, everyone, FIRM_OF, ROLE_EMAILS, ROLES, type Role } from './support/roles';
 import { routeInventory } from './support/route-inventory';
 import { type CallResult, call, db, firmIdOf, makePerson, memberIdOf, sessionCookie, userIdOf } from './support/world';
@@ -19,6 +19,7 @@ let aInvitationId = '';
 let aKeyId = '';
 let aKeySecret = '';
 let revokedKeySecret = '';
+let uploadKeySecret = '';
 let regionId = '';
 let unitId = '';
 
@@ -336,7 +337,7 @@ const MATRIX: Record<string, Case[]> = {
   'GET /api/records': [
     {
       context: 'published and own firm',
-      request: get(() => '/api/records?limit=200'),
+      request: get(() => '/api/records?limit=200&offset=0'),
       expect: everyone(
         {
           status: 200,
@@ -533,6 +534,58 @@ const MATRIX: Record<string, Case[]> = {
       expect: everyone(403, { anon: 401, aOwner: 200, aEngineer: 200, aContributor: 200, bAdmin: 404 }),
     },
   ],
+  'POST /api/submissions': [
+    {
+      context: 'upload for the active firm',
+      request: (role) => ({ method: 'POST', path: '/api/submissions', body: uploadForm(role) }),
+      expect: everyone(403, { anon: 401, aOwner: 201, aEngineer: 201, aContributor: 201, bAdmin: 201 }),
+    },
+  ],
+  'POST /api/submissions/check': [
+    {
+      context: 'dry run for the active firm',
+      request: (role) => ({ method: 'POST', path: '/api/submissions/check', body: uploadForm(role) }),
+      expect: everyone(403, { anon: 401, aOwner: 200, aEngineer: 200, aContributor: 200, bAdmin: 200 }),
+    },
+  ],
+  'PATCH /api/submissions/:id/records/:recordId': [
+    {
+      context: 'firm A record of a submission that is not returned',
+      request: () => ({
+        method: 'PATCH',
+        path: `/api/submissions/${A.submissionId}/records/${A.unpublishedId}`,
+        body: { values: { compressionIndex: 0.9 } },
+      }),
+      expect: everyone(403, { anon: 401, aOwner: 409, aEngineer: 409, aContributor: 409, bAdmin: 404 }),
+    },
+  ],
+  'GET /api/contribute/template': [
+    { context: 'public template', request: get(() => '/api/contribute/template'), expect: everyone(200) },
+  ],
+  'GET /api/firm/field-mapping': [
+    {
+      context: "own firm's remembered columns",
+      request: get(() => '/api/firm/field-mapping'),
+      expect: everyone(403, { anon: 401, aOwner: 200, aEngineer: 200, aContributor: 200, bAdmin: 200 }),
+    },
+  ],
+  'POST /api/partner/submissions': [
+    {
+      context: 'no key (a session is not enough)',
+      request: (role) => ({ method: 'POST', path: '/api/partner/submissions', body: uploadForm(role) }),
+      expect: everyone(401),
+    },
+    {
+      context: "firm A's key, CSV body",
+      request: (role) => ({
+        method: 'POST',
+        path: '/api/partner/submissions',
+        body: `Borehole / location id,Region,Geological unit,Depth top (m),Depth bottom (m),Cc\nAPI-${role}-${Math.random().toString(36).slice(2, 8)},Saltreach Estuary,Saltreach Estuarine Clay,3,3.4,0.7\n`,
+        headers: { 'x-api-key': uploadKeySecret, 'content-type': 'text/csv' },
+      }),
+      expect: everyone(201),
+    },
+  ],
   'GET /api/audit': [
     {
       context: 'own firm; platform admin sees all',
@@ -647,6 +700,9 @@ beforeAll(async () => {
   expect(key.status).toBe(201);
   aKeyId = (asObject(key).key as { id: string }).id;
   aKeySecret = String(asObject(key).secret);
+  uploadKeySecret = String(
+    asObject(await call('POST', '/api/firm/api-keys', cookies.aOwner, { name: 'matrix upload script' })).secret,
+  );
   const doomed = await call('POST', '/api/firm/api-keys', cookies.aOwner, { name: 'revoked script' });
   revokedKeySecret = String(asObject(doomed).secret);
   expect((await call('DELETE', `/api/firm/api-keys/${(asObject(doomed).key as { id: string }).id}`, cookies.aOwner)).status).toBe(

@@ -14,14 +14,41 @@ export interface FirmFixture {
   estimateId: string;
 }
 
+/**
+ * The fixtures' own geological unit, named to sort first, so the fixture records lead the record list
+ * whatever the demo bank holds.
+ */
 async function vocabulary() {
   const region = await db.selectFrom('region').select('id').where('slug', '=', 'saltreach-estuary').executeTakeFirstOrThrow();
+  await db
+    .insertInto('geological_unit')
+    .values({
+      name: 'Aa access matrix clay (invented)',
+      slug: 'aa-access-matrix-clay',
+      genesis: 'estuarine',
+      description: 'Invented for the access tests.',
+    })
+    .onConflict((oc) => oc.column('slug').doNothing())
+    .execute();
   const unit = await db
     .selectFrom('geological_unit')
     .select('id')
-    .where('slug', '=', 'saltreach-estuarine-clay')
+    .where('slug', '=', 'aa-access-matrix-clay')
     .executeTakeFirstOrThrow();
   return { regionId: region.id, unitId: unit.id };
+}
+
+/** A small upload in the template's format, with ids unique to this call. */
+export function uploadForm(label: string): FormData {
+  const id = `${label}-${Math.random().toString(36).slice(2, 8)}`;
+  const csv = [
+    'Borehole / location id,Sample id,Region,Geological unit,Depth top (m),Depth bottom (m),Cc,e0,LL (%)',
+    `MX-${id},U1,Saltreach Estuary,Saltreach Estuarine Clay,5,5.5,0.8,2.1,80`,
+  ].join('\n');
+  const form = new FormData();
+  form.append('file', new Blob([csv], { type: 'text/csv' }), `${id}.csv`);
+  form.append('options', JSON.stringify({ format: 'csv' }));
+  return form;
 }
 
 /** One firm's submission with a published and an unpublished test record, private details and an estimate. */

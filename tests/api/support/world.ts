@@ -65,16 +65,17 @@ export async function call(
   body?: unknown,
   headers: Record<string, string> = {},
 ): Promise<CallResult> {
+  const raw = body instanceof FormData || typeof body === 'string' || body instanceof Uint8Array;
   const response = await fetch(`${base}${path}`, {
     method,
     redirect: 'manual',
     headers: {
       origin: base,
       ...(cookie ? { cookie } : {}),
-      ...(body !== undefined ? { 'content-type': 'application/json' } : {}),
+      ...(body !== undefined && !raw ? { 'content-type': 'application/json' } : {}),
       ...headers,
     },
-    body: body !== undefined ? JSON.stringify(body) : undefined,
+    body: body === undefined ? undefined : raw ? (body as BodyInit) : JSON.stringify(body),
   });
   const text = await response.text();
   let parsed: unknown = null;

@@ -11,7 +11,8 @@ import { stewardsNewSubmissionMails } from './notifications';
 import { PRIVATE_COLUMNS, type RecordToStore, SHARED_COLUMNS } from './record-to-store';
 
 export interface Contributor {
-  userId: string;
+  /** null when a firm API key submitted */
+  userId: string | null;
   firmId: string;
   ipAddress: string | null;
   /** 'api' when a firm API key submitted, for the audit log */

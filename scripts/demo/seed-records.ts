@@ -1,0 +1,151 @@
+import { createHash } from 'node:crypto';
+import { duplicateKey } from '../../src/lib/import';
+import type { AppContext } from '../../src/lib/server/build-context';
+import { submitUpload } from '../../src/lib/server/contribute/submit-upload';
+import { bulkInsert } from '../../src/lib/server/db/bulk-insert';
+import { decideSubmission } from '../../src/lib/server/review/review-decision';
+import { inTenantTransaction } from '../../src/lib/server/tenancy/tenant-transaction';
+import { type DemoRecord, generateDemoRecords } from './generate-records';
+import { DEMO_PEOPLE } from './people';
+import { recordsToCsv } from './records-csv';
+
+const SUBMISSION_SIZE = 40;
+const APP_URL = 'http://127.0.0.1:4321';
+
+function contributorOf(firmSlug: string): string {
+  const person = DEMO_PEOPLE.find((p) => p.memberships.some((m) => m.firm === firmSlug && m.role === 'contributor'));
+  if (!person) throw new Error(`demo firm ${firmSlug} has no contributor`);
+  return person.email;
+}
+
+/** The firm's records in submissions of about 40, planted mistakes last (they stay waiting for review). */
+function batches(records: DemoRecord[]): DemoRecord[][] {
+  const ordered = [...records.filter((r) => !r.plantedOutlier), ...records.filter((r) => r.plantedOutlier)];
+  const out: DemoRecord[][] = [];
+  for (let i = 0; i < ordered.length; i += SUBMISSION_SIZE) out.push(ordered.slice(i, i + SUBMISSION_SIZE));
+  return out;
+}
+
+/** Raw readings go in beside the imported records (the CSV template carries summary values only). */
+async function attachIncrements(ctx: AppContext, firmId: string, submissionId: string, records: DemoRecord[]) {
+  const withReadings = records.filter((r) => r.increments?.length);
+  if (withReadings.length === 0) return;
+  await inTenantTransaction(ctx.database.db, { firmId, platformRole: 'user' }, async (trx) => {
+    const stored = await trx
+      .selectFrom('test_record as r')
+      .innerJoin('test_record_private as p', 'p.test_record_id', 'r.id')
+      .select(['r.id', 'p.borehole_id', 'p.sample_id', 'r.depth_top_m', 'r.depth_bottom_m'])
+      .where('r.submission_id', '=', submissionId)
+      .execute();
+    const idByKey = new Map(
+      stored.map((s) => [
+        duplicateKey({
+          boreholeId: s.borehole_id ?? '',
+          sampleId: s.sample_id,
+          depthTop: s.depth_top_m,
+          depthBottom: s.depth_bottom_m,
+        }),
+        s.id,
+      ]),
+    );
+    const rows = withReadings.flatMap((record) => {
+      const id = idByKey.get(
+        duplicateKey({
+          boreholeId: record.boreholeId ?? '',
+          sampleId: record.sampleId,
+          depthTop: record.depthTop ?? 0,
+          depthBottom: record.depthBottom ?? 0,
+        }),
+      );
+      return id
+        ? (record.increments ?? []).map((inc) => [id, inc.incrementNo, inc.appliedStressKpa, inc.isUnloading, inc.voidRatioEnd])
+        : [];
+    });
+    await bulkInsert(
+      trx,
+      'oedometer_increment',
+      [
+        { name: 'test_record_id', type: 'uuid' },
+        { name: 'increment_no', type: 'integer' },
+        { name: 'applied_stress_kpa', type: 'numeric' },
+        { name: 'is_unloading', type: 'boolean' },
+        { name: 'end_void_ratio', type: 'numeric' },
+      ],
+      rows,
+    );
+  });
+}
+
+/**
+ * Loads the invented test records through the same import path as a person's upload (CSV in the
+ * template's format, checked and stored whole), then plays the steward: most submissions accepted
+ * into the bank, the last of each firm (holding the planted mistakes) left waiting, and one returned
+ * with comments on two records.
+ */
+export async function seedRecords(ctx: AppContext): Promise<{ records: number; submissions: number }> {
+  const db = ctx.database.db;
+  const records = generateDemoRecords();
+  const steward = await db.selectFrom('user').select('id').where('email', '=', 'steward@example.test').executeTakeFirstOrThrow();
+  let submissions = 0;
+  for (const firmSlug of ['quillfen', 'ellery-voss', 'northmarch']) {
+    const firm = await db.selectFrom('organization').select('id').where('slug', '=', firmSlug).executeTakeFirstOrThrow();
+    const contributor = await db
+      .selectFrom('user')
+      .select('id')
+      .where('email', '=', contributorOf(firmSlug))
+      .executeTakeFirstOrThrow();
+    const parts = batches(records.filter((r) => r.firmSlug === firmSlug));
+    for (const [index, part] of parts.entries()) {
+      const csv = new TextEncoder().encode(recordsToCsv(part));
+      const upload = {
+        bytes: csv,
+        fileName: `${firmSlug}-oedometer-results-${index + 1}.csv`,
+        mediaType: 'text/csv',
+        sha256: createHash('sha256').update(csv).digest('hex'),
+        options: { format: 'csv' as const, remember: true },
+      };
+      const stored = await submitUpload(
+        db,
+        { userId: contributor.id, firmId: firm.id, ipAddress: null, via: 'seed' },
+        upload,
+        'csv',
+        APP_URL,
+      );
+      await attachIncrements(ctx, firm.id, stored.id, part);
+      submissions++;
+      const last = index === parts.length - 1;
+      if (last) continue;
+      if (firmSlug === 'ellery-voss' && index === parts.length - 2) {
+        const review = await db
+          .selectFrom('test_record')
+          .select(['id'])
+          .where('submission_id', '=', stored.id)
+          .orderBy('row_number')
+          .limit(2)
+          .execute();
+        await decideSubmission(
+          db,
+          { userId: steward.id, ipAddress: null },
+          stored.id,
+          {
+            action: 'return',
+            comment: 'Two records need a second look before they enter the bank.',
+            recordComments: review.map((r, i) => ({
+              recordId: r.id,
+              comment:
+                i === 0
+                  ? "σ'p looks high for this depth; please check the units (kPa)."
+                  : 'Cr is close to Cc; please confirm the unload–reload branch.',
+            })),
+          },
+          APP_URL,
+        );
+      } else {
+        await decideSubmission(db, { userId: steward.id, ipAddress: null }, stored.id, { action: 'accept' }, APP_URL);
+      }
+    }
+  }
+  // The demo's own notifications are not worth delivering: mark them sent.
+  await db.updateTable('mail_outbox').set({ sent_at: new Date() }).where('sent_at', 'is', null).execute();
+  return { records: records.length, submissions };
+}
