@@ -150,9 +150,9 @@ async function main() {
   if (vitestFirst.length) runVitest(vitestFirst, env);
 
   if (needsStack && (selected.has('api') || selected.has('browser'))) {
-    const outDir = join(dataDir, 'test-build');
+    let outDir;
     try {
-      stack.buildApp(outDir);
+      outDir = stack.buildForTests(join(dataDir, 'test-builds'));
     } catch (error) {
       record('build', 0, 1, error.message);
       return finish(started);

@@ -2,7 +2,7 @@
 // demo data, mail fake, the built app.
 import { spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
-import { existsSync, mkdirSync, readdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readdirSync, readFileSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { join, relative } from 'node:path';
 import { onCleanup, startChild } from './children.mjs';
 import { RunbookError } from './errors.mjs';
@@ -158,6 +158,33 @@ export function buildApp(outDir, { force = false } = {}) {
   }
   writeFileSync(stampFile, fingerprint);
   console.log(`• Built in ${((Date.now() - started) / 1000).toFixed(1)} s`);
+}
+
+/**
+ * A build for a test run, in a folder named after the sources' fingerprint: a run never rebuilds a
+ * folder another run may be serving from, and an unchanged checkout reuses the last build. The build is
+ * made in a temporary folder and renamed into place. Returns the folder.
+ */
+export function buildForTests(buildsDir) {
+  const fingerprint = sourceFingerprint();
+  const outDir = join(buildsDir, fingerprint.slice(0, 16));
+  if (existsSync(join(outDir, 'server', 'entry.mjs'))) {
+    console.log('• App build is up to date');
+    return outDir;
+  }
+  const tmpDir = `${outDir}.tmp-${process.pid}`;
+  buildApp(tmpDir, { force: true });
+  try {
+    renameSync(tmpDir, outDir);
+  } catch {
+    rmSync(tmpDir, { recursive: true, force: true });
+  }
+  const builds = readdirSync(buildsDir)
+    .filter((name) => !name.includes('.tmp-'))
+    .map((name) => ({ name, time: statSync(join(buildsDir, name)).mtimeMs }))
+    .sort((a, b) => b.time - a.time);
+  for (const old of builds.slice(3)) rmSync(join(buildsDir, old.name), { recursive: true, force: true });
+  return outDir;
 }
 
 /** The environment the app server reads through astro:env. */

@@ -22,5 +22,8 @@ export function connectDatabase(connectionString: string, options: { max?: numbe
   });
   // Without a listener an idle client's error (e.g. the server restarting) would kill the process.
   pool.on('error', (error) => console.error(`[db] idle connection lost: ${error.message}`));
+  // A connection that breaks while checked out also emits 'error'; the query in flight already fails
+  // with it, so log it here instead of letting it crash the process.
+  pool.on('connect', (client) => client.on('error', (error) => console.error(`[db] connection lost: ${error.message}`)));
   return { db: new Kysely<Database>({ dialect: new PostgresDialect({ pool }) }), pool };
 }
