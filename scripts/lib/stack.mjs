@@ -57,8 +57,18 @@ export async function bringUpDatabase({ database, fresh = false, quiet = false }
 }
 
 /** Runs a TypeScript script with tsx and fails loudly when it fails. */
+/**
+ * Node's young generation is small by default; uploads of 100,000 rows allocate a great deal of
+ * short-lived garbage, and a larger semi-space cuts the collector's share (measured by bench:import).
+ */
+export const NODE_SERVER_FLAGS = ['--max-semi-space-size=64'];
+
 export function runTsx(script, env, what) {
-  const result = spawnSync(bin('tsx'), [script], { cwd: projectDir, env: { ...process.env, ...env }, stdio: 'inherit' });
+  const result = spawnSync(bin('tsx'), [script], {
+    cwd: projectDir,
+    env: { ...process.env, NODE_OPTIONS: [process.env.NODE_OPTIONS ?? '', ...NODE_SERVER_FLAGS].join(' ').trim(), ...env },
+    stdio: 'inherit',
+  });
   if (result.status !== 0) throw new RunbookError(`${what} failed (see the lines above).`);
 }
 
@@ -205,7 +215,7 @@ export function appEnvironment({ port, appUrl, secrets, mail, mode = 'developmen
 /** Serves the built app (node adapter's standalone handler, through scripts/serve.mjs) with NODE_ENV=production. */
 export async function serveBuiltApp(outDir, env, { quiet = false } = {}) {
   await assertPortFree(Number(env.PORT), 'PORT', 'app');
-  const child = startChild('app', process.execPath, [join(projectDir, 'scripts', 'serve.mjs')], {
+  const child = startChild('app', process.execPath, [...NODE_SERVER_FLAGS, join(projectDir, 'scripts', 'serve.mjs')], {
     cwd: projectDir,
     env: { ...process.env, ...env, NODE_ENV: 'production', CLAYBANK_BUILD_DIR: outDir },
     quiet,

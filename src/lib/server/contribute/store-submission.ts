@@ -4,6 +4,7 @@ import { recordAudit } from '../audit/audit-log';
 import type { SubmissionSourceKind } from '../db/bank-tables';
 import { bulkInsert } from '../db/bulk-insert';
 import type { Database } from '../db/schema';
+import { uuidV7 } from '../db/uuid-v7';
 import { ApiError } from '../http/api-error';
 import { enqueueMail } from '../mail/outbox';
 import { inTenantTransaction } from '../tenancy/tenant-transaction';
@@ -101,7 +102,7 @@ export async function storeSubmission(
       })
       .execute();
 
-    const ids = records.map(() => randomUUID());
+    const ids = records.map(() => uuidV7());
     await bulkInsert(
       trx,
       'test_record',
