@@ -627,6 +627,9 @@ const PAGES: Record<string, string> = {
   'PAGE /firm/new': '/firm/new',
   'PAGE /invitations/:id': '/invitations/unknown-invitation',
   'PAGE /dev/inbox': '/dev/inbox',
+  'PAGE /audit': '/audit',
+  'PAGE /contribute/submissions/:id': '/contribute/submissions/SUBMISSION_A',
+  'PAGE /review/:id': '/review/SUBMISSION_A',
 };
 const signedOutPage = everyone({ status: 302 }, { anon: 200 });
 const PAGE_EXPECTATIONS: Record<string, Record<Role, Expectation>> = {
@@ -637,9 +640,29 @@ const PAGE_EXPECTATIONS: Record<string, Record<Role, Expectation>> = {
   'PAGE /firm': signedInPage('/firm'),
   'PAGE /firm/new': signedInPage('/firm/new'),
   'PAGE /invitations/:id': signedInPage('/invitations/unknown-invitation'),
+  'PAGE /contribute': signedInPage('/contribute'),
+  'PAGE /review': signedInPage('/review'),
+  'PAGE /audit': everyone(
+    { status: 200, privateMarkersOnly: true },
+    { anon: { status: 302, check: (r) => expect(r.location).toBe('/sign-in?next=/audit') } },
+  ),
+  'PAGE /contribute/submissions/:id': everyone(200, {
+    anon: 302,
+    aOwner: { status: 200, check: (r) => expect(r.text).toContain(A.submissionId) },
+  }),
+  'PAGE /review/:id': everyone(200, {
+    anon: 302,
+    steward: { status: 200, check: (r) => expect(r.text).toContain(A.submissionId) },
+  }),
 };
 for (const [route, path] of Object.entries(PAGES)) {
-  MATRIX[route] = [{ context: 'page', request: get(() => path), expect: PAGE_EXPECTATIONS[route] ?? everyone(200) }];
+  MATRIX[route] = [
+    {
+      context: 'page',
+      request: get(() => path.replace('SUBMISSION_A', A.submissionId)),
+      expect: PAGE_EXPECTATIONS[route] ?? everyone(200),
+    },
+  ];
 }
 
 /** Strings of one firm that must never appear in an answer to someone outside it. */

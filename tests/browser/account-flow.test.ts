@@ -1,7 +1,7 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { testEnv } from '../support/env';
-import { type BrowserSession, baseUrl, openBrowser, screenshot, waitForIslands } from './support/browser';
+import { type BrowserSession, baseUrl, openBrowser, paceAuthAttempt, screenshot, waitForIslands } from './support/browser';
 
 let session: BrowserSession;
 beforeAll(async () => {
@@ -54,6 +54,7 @@ async function signUp(page: Page, person: typeof ana): Promise<void> {
   await page.getByLabel('Your name').fill(person.name);
   await page.getByLabel('Work e-mail address').fill(person.email);
   await page.getByLabel('Password').fill(person.password);
+  await paceAuthAttempt('sign-up');
   await page.getByRole('button', { name: 'Create account' }).click();
   await page.waitForURL(`${baseUrl}/check-email`);
 }
@@ -71,6 +72,7 @@ describe('accounts and firms, end to end in a real browser', () => {
     await waitForIslands(page);
     await page.getByLabel('Work e-mail address').fill('not-an-address');
     await page.getByLabel('Password').fill('short');
+    await paceAuthAttempt('sign-up');
     await page.getByRole('button', { name: 'Create account' }).click();
     await expect(page.getByTestId('sign-up-name-error').textContent()).resolves.toBe('Enter your name.');
     await expect(page.getByTestId('sign-up-email-error').textContent()).resolves.toContain('name@firm.com');
@@ -194,6 +196,7 @@ describe('accounts and firms, end to end in a real browser', () => {
     await screenshot(page, 'flow-12-sign-in');
     await page.getByLabel('E-mail address').fill(ana.email);
     await page.getByLabel('Password').fill(ana.password);
+    await paceAuthAttempt('sign-in');
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.waitForURL(`${baseUrl}/firm`);
     await waitForIslands(page);
@@ -238,6 +241,7 @@ describe('accounts and firms, end to end in a real browser', () => {
     await waitForIslands(page);
     await page.getByLabel('E-mail address').fill(ana.email);
     await page.getByLabel('Password').fill(newPassword);
+    await paceAuthAttempt('sign-in');
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.waitForURL(`${baseUrl}/welcome`);
     await expect(page.getByTestId('welcome-with-firm').textContent()).resolves.toContain(anaFirm);

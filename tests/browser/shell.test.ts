@@ -34,8 +34,6 @@ describe('the shell in a real browser', () => {
     const { page } = session;
     for (const [label, path] of [
       ['Bank', '/bank'],
-      ['Contribute', '/contribute'],
-      ['Review', '/review'],
       ['Estimates', '/estimates'],
     ] as const) {
       await page.goto(`${baseUrl}/`);
@@ -48,12 +46,18 @@ describe('the shell in a real browser', () => {
     await screenshot(page, 'empty-state-estimates');
   });
 
-  it('sends a signed-out visitor from Firm settings to sign in, and back afterwards', async () => {
+  it('sends a signed-out visitor from Contribute, Review and Firm settings to sign in', async () => {
     const { page } = session;
-    await page.goto(`${baseUrl}/`);
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Firm settings' }).click();
-    await page.waitForURL(`${baseUrl}/sign-in?next=/firm`);
-    await expect(page.getByRole('heading', { level: 1 }).textContent()).resolves.toBe('Sign in');
+    for (const [label, path] of [
+      ['Contribute', '/contribute'],
+      ['Review', '/review'],
+      ['Firm settings', '/firm'],
+    ] as const) {
+      await page.goto(`${baseUrl}/`);
+      await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: label }).click();
+      await page.waitForURL(`${baseUrl}/sign-in?next=${path}`);
+      await expect(page.getByRole('heading', { level: 1 }).textContent()).resolves.toBe('Sign in');
+    }
   });
 
   it('switches to US customary units and remembers it on the server', async () => {

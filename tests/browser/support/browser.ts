@@ -67,3 +67,29 @@ export async function screenshot(page: Page, name: string): Promise<string> {
 export async function waitForIslands(page: Page): Promise<void> {
   await page.waitForFunction(() => [...document.querySelectorAll('astro-island')].every((island) => !island.hasAttribute('ssr')));
 }
+
+const attemptsFile = (kind: string) => join(testEnv('CLAYBANK_TEST_ARTIFACTS'), `auth-attempts-${kind}.json`);
+
+/**
+ * Sign-in and sign-up allow 3 attempts per 10 s from one client address, and every browser test comes
+ * from 127.0.0.1. Before an attempt, wait until fewer than 3 were made in the last window by any test
+ * file of this run (the attempts are noted in a file, since each test file runs on its own).
+ */
+export async function paceAuthAttempt(kind: 'sign-in' | 'sign-up'): Promise<void> {
+  const { existsSync, mkdirSync, readFileSync, writeFileSync } = await import('node:fs');
+  const file = attemptsFile(kind);
+  mkdirSync(testEnv('CLAYBANK_TEST_ARTIFACTS'), { recursive: true });
+  // the server's 10 s window starts when a request arrives, a little after it was paced here
+  const windowMs = 11_500;
+  for (;;) {
+    const now = Date.now();
+    const recent = (existsSync(file) ? (JSON.parse(readFileSync(file, 'utf8')) as number[]) : []).filter(
+      (t) => now - t < windowMs,
+    );
+    if (recent.length < 3) {
+      writeFileSync(file, JSON.stringify([...recent, now]));
+      return;
+    }
+    await new Promise((resolve) => setTimeout(resolve, Math.max(50, (recent[0] ?? now) + windowMs - now)));
+  }
+}

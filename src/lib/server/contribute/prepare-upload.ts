@@ -3,6 +3,7 @@ import {
   applyEdits,
   autoMapColumns,
   duplicateKey,
+  IMPORT_FIELDS,
   type ImportError,
   MAX_FILE_BYTES,
   mapRows,
@@ -107,7 +108,10 @@ async function readRows(db: Kysely<Database>, firmId: string, bytes: Uint8Array,
   const defaults = options.region ? { region: options.region } : undefined;
   const mapped = mapRows(parsed.table, mapping, units, options.edits ?? {}, { defaults });
   if (!mapped.ok) return mapped;
-  const missingRequired = auto?.missingRequired ?? [];
+  const chosen = new Set(mapping.filter((field): field is string => field !== null));
+  const missingRequired =
+    auto?.missingRequired ??
+    IMPORT_FIELDS.filter((f) => f.required && !chosen.has(f.key) && !(f.key === 'region' && options.region)).map((f) => f.key);
   return {
     ok: true as const,
     rows: mapped.rows as RawRow[],

@@ -71,7 +71,7 @@ export async function decideSubmission(
       bankVersion = version.id;
       await trx
         .updateTable('test_record')
-        .set({ status: 'published', bank_version_id: bankVersion, review_comment: null, updated_at: now })
+        .set({ status: 'published', bank_version_id: bankVersion, updated_at: now })
         .where('submission_id', '=', submissionId)
         .where('status', '=', 'pending')
         .execute();
