@@ -1,51 +1,53 @@
-import type { ImportFlag, SampleQualityClass, TestMethod, UscsSymbol } from '../db/bank-tables';
+import type { ImportFlag, TestRecordPrivateTable, TestRecordTable } from '../db/bank-tables';
 
 /** The shared (anonymised) values of one record, in the bank's columns and units. */
-export interface SharedValues {
-  region_id: string;
-  geological_unit_id: string;
-  location_cell: string | null;
-  depth_top_m: number;
-  depth_bottom_m: number;
-  uscs_symbol: UscsSymbol | null;
-  sampling_method: string | null;
-  water_content_pct: number | null;
-  liquid_limit_pct: number | null;
-  plastic_limit_pct: number | null;
-  plasticity_index_pct: number | null;
-  specific_gravity: number | null;
-  bulk_unit_weight_kn_per_m3: number | null;
-  initial_void_ratio: number | null;
-  organic_content_pct: number | null;
-  test_method: TestMethod | null;
-  test_standard: string | null;
-  compression_index: number | null;
-  recompression_index: number | null;
-  preconsolidation_stress_kpa: number | null;
-  vertical_effective_stress_kpa: number | null;
-  overconsolidation_ratio: number | null;
-  cv_nc_m2_per_year: number | null;
-  cv_oc_m2_per_year: number | null;
-  secondary_compression_index: number | null;
-  mv_m2_per_mn: number | null;
-  permeability_m_per_s: number | null;
-  delta_e_over_e0: number | null;
-  sample_quality_class: SampleQualityClass | null;
-}
+export type SharedValues = Pick<
+  TestRecordTable,
+  | 'region_id'
+  | 'geological_unit_id'
+  | 'location_cell'
+  | 'depth_top_m'
+  | 'depth_bottom_m'
+  | 'uscs_symbol'
+  | 'sampling_method'
+  | 'water_content_pct'
+  | 'liquid_limit_pct'
+  | 'plastic_limit_pct'
+  | 'plasticity_index_pct'
+  | 'specific_gravity'
+  | 'bulk_unit_weight_kn_per_m3'
+  | 'initial_void_ratio'
+  | 'organic_content_pct'
+  | 'test_method'
+  | 'test_standard'
+  | 'compression_index'
+  | 'recompression_index'
+  | 'preconsolidation_stress_kpa'
+  | 'vertical_effective_stress_kpa'
+  | 'overconsolidation_ratio'
+  | 'cv_nc_m2_per_year'
+  | 'cv_oc_m2_per_year'
+  | 'secondary_compression_index'
+  | 'mv_m2_per_mn'
+  | 'permeability_m_per_s'
+  | 'delta_e_over_e0'
+  | 'sample_quality_class'
+>;
 
 /** The firm-private values of one record. */
-export interface PrivateValues {
-  project_name: string | null;
-  client_name: string | null;
-  borehole_id: string | null;
-  sample_id: string | null;
-  easting_m: number | null;
-  northing_m: number | null;
-  latitude_deg: number | null;
-  longitude_deg: number | null;
-  coordinate_system: string | null;
-  notes: string | null;
-}
+export type PrivateValues = Pick<
+  TestRecordPrivateTable,
+  | 'project_name'
+  | 'client_name'
+  | 'borehole_id'
+  | 'sample_id'
+  | 'easting_m'
+  | 'northing_m'
+  | 'latitude_deg'
+  | 'longitude_deg'
+  | 'coordinate_system'
+  | 'notes'
+>;
 
 /** One load increment of the raw oedometer readings. */
 export interface IncrementToStore {

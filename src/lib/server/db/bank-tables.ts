@@ -1,22 +1,11 @@
 import type { ColumnType, Generated, GeneratedAlways, Insertable, Selectable, Updateable } from 'kysely';
+import { GENESIS_VALUES } from '../../schemas/vocabulary';
 import type { Timestamp } from './schema';
 
 // Tables of migrations/20261202T0200_bank_model.ts. The closed lists mirror the CHECK constraints there.
 
-export const GENESES = [
-  'marine',
-  'estuarine',
-  'lacustrine',
-  'glaciolacustrine',
-  'glacial',
-  'alluvial',
-  'fluvial',
-  'organic',
-  'residual',
-  'aeolian',
-  'colluvial',
-  'other',
-] as const;
+/** Closed list shared with the vocabulary schema (src/lib/schemas/vocabulary.ts). */
+export const GENESES = GENESIS_VALUES;
 export type Genesis = (typeof GENESES)[number];
 
 /** ASTM D2487 group symbols, dual symbols included; peat is 'Pt'. */
