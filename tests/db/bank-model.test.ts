@@ -11,6 +11,7 @@ import {
 } from '../../src/lib/server/db/bank-tables';
 import { connectDatabase } from '../../src/lib/server/db/connect';
 import type { Database } from '../../src/lib/server/db/schema';
+import { inTenantTransaction } from '../../src/lib/server/tenancy/tenant-transaction';
 import { testEnv } from '../support/env';
 
 type BankDatabase = Database & BankTables;
@@ -19,14 +20,9 @@ type Scope = { firmId?: string; platformRole?: 'admin' | 'steward' | 'user' };
 const app = connectDatabase(testEnv('CLAYBANK_TEST_DATABASE_URL'), { max: 3 });
 const db = app.db as unknown as Kysely<BankDatabase>;
 
-/** A transaction with the row-level-security context the app sets. */
+/** A transaction with the row-level-security context the app sets (the app's own helper). */
 function within<T>(scope: Scope, fn: (trx: Transaction<BankDatabase>) => Promise<T>): Promise<T> {
-  return db.transaction().execute(async (trx) => {
-    await sql`select set_config('app.firm_id', ${scope.firmId ?? ''}, true), set_config('app.platform_role', ${scope.platformRole ?? ''}, true)`.execute(
-      trx,
-    );
-    return fn(trx);
-  });
+  return inTenantTransaction(app.db, { firmId: scope.firmId ?? null, platformRole: scope.platformRole ?? null }, fn);
 }
 
 const tag = randomUUID().slice(0, 8);

@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BankTables, NewTestRecord } from '../../src/lib/server/db/bank-tables';
 import { connectDatabase } from '../../src/lib/server/db/connect';
 import type { Database } from '../../src/lib/server/db/schema';
+import { inTenantTransaction } from '../../src/lib/server/tenancy/tenant-transaction';
 import { testEnv } from '../support/env';
 
 type BankDatabase = Database & BankTables;
@@ -27,13 +28,9 @@ const PUBLIC_OR_INTERNAL_TABLES = ['region', 'geological_unit', 'bank_version', 
 const app = connectDatabase(testEnv('CLAYBANK_TEST_DATABASE_URL'), { max: 3 });
 const db = app.db as unknown as Kysely<BankDatabase>;
 
+/** A transaction with the row-level-security context the app sets (the app's own helper). */
 function within<T>(scope: Scope, fn: (trx: Transaction<BankDatabase>) => Promise<T>): Promise<T> {
-  return db.transaction().execute(async (trx) => {
-    await sql`select set_config('app.firm_id', ${scope.firmId ?? ''}, true), set_config('app.platform_role', ${scope.platformRole ?? ''}, true)`.execute(
-      trx,
-    );
-    return fn(trx);
-  });
+  return inTenantTransaction(app.db, { firmId: scope.firmId ?? null, platformRole: scope.platformRole ?? null }, fn);
 }
 
 async function countRows(executor: Kysely<BankDatabase>, table: string, where = sql`true`): Promise<number> {
