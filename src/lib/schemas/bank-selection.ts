@@ -35,7 +35,7 @@ const NUMBER = /^-?(?:\d+(?:\.\d*)?|\.\d+)(?:e[-+]?\d+)?$/i;
 /** "5..15", "..0.8", "0.3.." → { min, max }; the bounds are inclusive. */
 export const rangeSchema = z.string().transform((text, ctx): NumericRange => {
   const parts = text.split('..');
-  const [low, high] = parts.map((part) => part.trim());
+  const [low = '', high = ''] = parts.map((part) => part.trim());
   if (parts.length !== 2 || (low === '' && high === '') || ![low, high].every((part) => part === '' || NUMBER.test(part))) {
     ctx.addIssue({ code: 'custom', message: 'Write a range as min..max (either side may be left out), e.g. 5..15.' });
     return z.NEVER;
