@@ -4,7 +4,9 @@
  * same value (the record's shared field); values are always in the bank's SI units (`unitKind` says which
  * conversion applies on display); `logScale` marks the parameters the trade reads on log axes.
  */
-export type ParameterUnitKind = 'length' | 'stress' | 'cv' | 'percent' | 'ratio';
+import type { QuantityKind } from '../units/display';
+
+export type ParameterUnitKind = Extract<QuantityKind, 'length' | 'stress' | 'cv' | 'percent' | 'ratio'>;
 
 export interface BankParameter {
   key: string;
