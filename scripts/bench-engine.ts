@@ -11,6 +11,7 @@ import { toEngineInput } from '../src/lib/consolidation/input-conversion';
 import { runMonteCarlo } from '../src/lib/consolidation/monte-carlo';
 import { buildPlan } from '../src/lib/consolidation/monte-carlo-plan';
 import { summariseMonteCarlo } from '../src/lib/consolidation/monte-carlo-summary';
+import { splitMix64 } from '../src/lib/consolidation/random';
 import { estimatePreviewSchema } from '../src/lib/schemas/estimate-preview';
 
 const REALISATIONS = 10_000;
@@ -132,16 +133,10 @@ function floorNormals(state: Uint32Array, z: Float64Array): void {
 }
 
 function floorSeed(seed: number): Uint32Array {
-  const state = new Uint32Array(4);
-  let st = seed >>> 0;
-  for (let i = 0; i < 4; i++) {
-    st = (st + 0x9e3779b9) | 0;
-    let z = st;
-    z = Math.imul(z ^ (z >>> 16), 0x21f0aaad);
-    z = Math.imul(z ^ (z >>> 15), 0x735a2d97);
-    state[i] = (z ^ (z >>> 15)) >>> 0;
-  }
-  return state;
+  const next = splitMix64(BigInt(seed >>> 0));
+  const a = next();
+  const b = next();
+  return Uint32Array.from([a & 0xffffffffn, a >> 32n, b & 0xffffffffn, b >> 32n], Number);
 }
 
 /** Columns cc, e0, cr, OCR, cv, Cα per layer (e0 correlated with cc), and the list of varying ones. */

@@ -1,6 +1,7 @@
 // npm test: sets up everything on a fresh machine and runs every suite — lint, types, unit,
 // database, API and browser — against a fresh test database and the built app. Ends with one
-// line `N passed, N failed` and exits non-zero when anything failed.
+// line `N passed, N failed, N skipped` and exits non-zero when anything failed or a selected suite
+// ran no tests.
 //   npm test -- --only unit,db      run some suites (lint, types, unit, db, api, browser)
 import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
@@ -36,9 +37,15 @@ const runDir = join(dataDir, 'test-runs', String(process.pid));
 const tally = [];
 const bin = (name) => join(projectDir, 'node_modules', '.bin', name);
 
-function record(suite, passed, failed, note = '') {
-  tally.push({ suite, passed, failed, note });
-  console.log(`  ${failed ? '✖' : '✔'} ${suite}: ${passed} passed, ${failed} failed${note ? ` (${note})` : ''}`);
+function record(suite, passed, failed, skipped = 0, note = '') {
+  tally.push({ suite, passed, failed, skipped, note });
+  const counts = `${passed} passed, ${failed} failed, ${skipped} skipped`;
+  console.log(`  ${failed ? '✖' : '✔'} ${suite}: ${counts}${note ? ` (${note})` : ''}`);
+}
+
+function totals() {
+  const sum = (key) => tally.reduce((total, row) => total + row[key], 0);
+  return { passed: sum('passed'), failed: sum('failed'), skipped: sum('skipped') };
 }
 
 /** A whole-tool check (lint, types) counts as one test. */
@@ -48,22 +55,24 @@ function runCheck(suite, command, args, env = {}) {
   const result = spawnSync(command, args, { cwd: projectDir, env: { ...process.env, ...env }, encoding: 'utf8' });
   const seconds = ((Date.now() - started) / 1000).toFixed(1);
   if (result.status === 0) {
-    record(suite, 1, 0, `${seconds} s`);
+    record(suite, 1, 0, 0, `${seconds} s`);
   } else {
     process.stdout.write(result.stdout.split('\n').slice(-80).join('\n'));
     process.stderr.write(result.stderr.split('\n').slice(-80).join('\n'));
-    record(suite, 0, 1, `${seconds} s`);
+    record(suite, 0, 1, 0, `${seconds} s`);
   }
 }
 
-/** Runs vitest projects; counts every test from its JSON report (a file that fails to load counts as one failure). */
+/**
+ * Runs vitest projects; counts every test from its JSON report. A file that fails to load counts as
+ * one failure, and so does a selected project in which no test ran (none found, or all skipped).
+ */
 function runVitest(projects, env) {
   const report = join(runDir, `vitest-${projects.join('-')}.json`);
   const args = [
     'run',
     '--config',
     'tests/vitest.config.ts',
-    '--passWithNoTests',
     '--reporter=default',
     '--reporter=json',
     `--outputFile.json=${report}`,
@@ -72,26 +81,38 @@ function runVitest(projects, env) {
   console.log(`\n• ${projects.join(' + ')}: vitest`);
   const result = spawnSync(bin('vitest'), args, { cwd: projectDir, env: { ...process.env, ...env }, stdio: 'inherit' });
   if (!existsSync(report)) {
-    record(projects.join('+'), 0, 1, `vitest exited with ${result.status} and wrote no report`);
+    record(projects.join('+'), 0, 1, 0, `vitest exited with ${result.status} and wrote no report (no test files found?)`);
     return;
   }
   const json = JSON.parse(readFileSync(report, 'utf8'));
+  let projectFailures = 0;
   for (const project of projects) {
+    let files = 0;
     let passed = 0;
     let failed = 0;
+    let skipped = 0;
     for (const file of json.testResults) {
       const inProject = file.name.includes(`/tests/${project}/`);
       if (!inProject) continue;
+      files += 1;
       const assertions = file.assertionResults ?? [];
       passed += assertions.filter((a) => a.status === 'passed').length;
       const failedHere = assertions.filter((a) => a.status === 'failed').length;
       failed += failedHere;
+      // skipped, todo, and pending (never started): every test that neither passed nor failed
+      skipped += assertions.length - failedHere - assertions.filter((a) => a.status === 'passed').length;
       if (file.status === 'failed' && failedHere === 0) failed += 1;
     }
-    record(project, passed, failed);
+    let note = '';
+    if (passed + failed === 0) {
+      failed += 1;
+      note = files === 0 ? `no test files found under tests/${project}` : `no test ran in ${files} file(s)`;
+    }
+    projectFailures += failed;
+    record(project, passed, failed, skipped, note);
   }
-  if (result.status !== 0 && json.numFailedTests === 0 && json.numFailedTestSuites === 0) {
-    record('vitest', 0, 1, `exited with ${result.status}`);
+  if (result.status !== 0 && projectFailures === 0) {
+    record('vitest', 0, 1, 0, `exited with ${result.status}`);
   }
 }
 
@@ -154,7 +175,7 @@ async function main() {
     try {
       outDir = stack.buildForTests(join(dataDir, 'test-builds'));
     } catch (error) {
-      record('build', 0, 1, error.message);
+      record('build', 0, 1, 0, error.message);
       return finish(started);
     }
     const port = await freePort();
@@ -173,22 +194,22 @@ async function main() {
 }
 
 function finish(started) {
-  const passed = tally.reduce((sum, row) => sum + row.passed, 0);
-  const failed = tally.reduce((sum, row) => sum + row.failed, 0);
-  console.log(`\nSuites: ${tally.map((row) => `${row.suite} ${row.passed}/${row.passed + row.failed}`).join(', ')}`);
+  const suites = tally.map(
+    (row) => `${row.suite} ${row.passed}/${row.passed + row.failed}${row.skipped ? ` (${row.skipped} skipped)` : ''}`,
+  );
+  console.log(`\nSuites: ${suites.join(', ')}`);
   console.log(`Time: ${((Date.now() - started) / 1000).toFixed(0)} s`);
-  return { passed, failed };
+  return totals();
 }
 
-let outcome = { passed: 0, failed: 1 };
+let outcome = { passed: 0, failed: 1, skipped: 0 };
 try {
   outcome = await main();
 } catch (error) {
   console.error(error instanceof RunbookError ? `\n✖ ${error.message}` : error);
-  const passed = tally.reduce((sum, row) => sum + row.passed, 0);
-  const failed = tally.reduce((sum, row) => sum + row.failed, 0) + 1;
-  outcome = { passed, failed };
+  const sums = totals();
+  outcome = { ...sums, failed: sums.failed + 1 };
 }
 await cleanup();
-console.log(`${outcome.passed} passed, ${outcome.failed} failed`);
+console.log(`${outcome.passed} passed, ${outcome.failed} failed, ${outcome.skipped} skipped`);
 process.exit(outcome.failed > 0 || outcome.passed === 0 ? 1 : 0);

@@ -3,31 +3,59 @@
  * same sequence, on any JavaScript engine.
  */
 
+const MASK_32 = 0xffffffffn;
+
 /**
- * xoshiro128** (Blackman & Vigna 2018, "Scrambled linear pseudorandom number generators"),
- * 32-bit state words, period 2^128 − 1. Seeded from one 32-bit integer by a SplitMix32-style
- * hash so that nearby seeds give unrelated streams.
+ * SplitMix64 (Steele, Lea & Flood 2014, "Fast splittable pseudorandom number generators"), as in
+ * Vigna's reference splitmix64.c: a 64-bit counter stepped by 0x9e3779b97f4a7c15 and mixed. The
+ * xoshiro authors recommend it for filling a xoshiro state from a seed. BigInt keeps the 64-bit
+ * arithmetic exact; it runs only while seeding.
+ */
+export function splitMix64(seed: bigint): () => bigint {
+  let state = BigInt.asUintN(64, seed);
+  return () => {
+    state = BigInt.asUintN(64, state + 0x9e3779b97f4a7c15n);
+    let z = state;
+    z = BigInt.asUintN(64, (z ^ (z >> 30n)) * 0xbf58476d1ce4e5b9n);
+    z = BigInt.asUintN(64, (z ^ (z >> 27n)) * 0x94d049bb133111ebn);
+    return z ^ (z >> 31n);
+  };
+}
+
+/**
+ * xoshiro128** 1.1 (Blackman & Vigna, "Scrambled linear pseudorandom number generators", ACM
+ * TOMS 2021; reference C at prng.di.unimi.it), 32-bit state words, period 2^128 − 1. A seed fills
+ * the state with two SplitMix64 outputs, low word first, so that nearby seeds give unrelated
+ * streams.
  */
 export class Xoshiro128 {
-  private s0: number;
-  private s1: number;
-  private s2: number;
-  private s3: number;
+  private s0 = 0;
+  private s1 = 0;
+  private s2 = 0;
+  private s3 = 0;
 
+  /** Seed: an integer 0 … 2^32 − 1 (other numbers are taken modulo 2^32). */
   constructor(seed: number) {
-    let state = seed >>> 0;
-    const next = () => {
-      state = (state + 0x9e3779b9) | 0;
-      let z = state;
-      z = Math.imul(z ^ (z >>> 16), 0x21f0aaad);
-      z = Math.imul(z ^ (z >>> 15), 0x735a2d97);
-      return (z ^ (z >>> 15)) >>> 0;
-    };
-    this.s0 = next();
-    this.s1 = next();
-    this.s2 = next();
-    this.s3 = next();
-    if ((this.s0 | this.s1 | this.s2 | this.s3) === 0) this.s0 = 1;
+    const next = splitMix64(BigInt(seed >>> 0));
+    const a = next();
+    const b = next();
+    // SplitMix64 is a bijection of its counter, so two successive outputs are never both zero.
+    this.setState([Number(a & MASK_32), Number(a >> 32n), Number(b & MASK_32), Number(b >> 32n)]);
+  }
+
+  /** A generator started from the given state words (not all zero), as the reference code's `s`. */
+  static fromState(state: readonly [number, number, number, number]): Xoshiro128 {
+    const rng = new Xoshiro128(0);
+    rng.setState(state);
+    return rng;
+  }
+
+  private setState([s0, s1, s2, s3]: readonly [number, number, number, number]): void {
+    if ((s0 | s1 | s2 | s3) >>> 0 === 0) throw new RangeError('A xoshiro128** state must not be all zero.');
+    this.s0 = s0 | 0;
+    this.s1 = s1 | 0;
+    this.s2 = s2 | 0;
+    this.s3 = s3 | 0;
   }
 
   /** Next unsigned 32-bit integer. */

@@ -32,7 +32,8 @@ const singleClay = (overrides: Partial<EstimatePreviewBody['layers'][number]> = 
 describe('previewEstimate', () => {
   it('one NC layer under a wide fill: UFC Eq. 5-12 at the mid-point and t90 = T90·H²/cv', () => {
     // source: UFC 3-220-10 Eq. 5-12; σ'v0 = (18 − 9.81) × 5 = 40.95 kPa; worked by hand:
-    // 0.6/2.5 × 10 × log10(80.95/40.95) = 0.71000 m. T90 = 0.8481 (reference sheet), Hdr = 10 m, cv = 2 m²/yr.
+    // 0.6/2.5 × 10 × log10(80.95/40.95) = 0.71000 m. T90 = 0.8481 (Terzaghi 1943 series, see terzaghi.test.ts),
+    // Hdr = 10 m, cv = 2 m²/yr.
     const r = preview(singleClay());
     expect(r.sublayers[0]?.sigmaV0).toBeCloseTo(40.95, 10);
     expect(r.settlement.primary).toBeCloseTo(710.0, 0);
@@ -132,7 +133,8 @@ describe('previewEstimate', () => {
     };
     const r = preview(clayBelowSand);
     expect(r.settlement.layers[0]?.primary).toBe(0);
-    // One-way drainage up into the sand: Hdr = 10 m (source: UFC 3-220-10 §5-5.3; T90 from the reference sheet).
+    // One-way drainage up into the sand: Hdr = 10 m (source: UFC 3-220-10 (2022) §5-5.3; T90 = 0.8481 from the
+    // Terzaghi 1943 series).
     expect(r.t90Years).toBeCloseTo((0.8481 * 100) / 2, 2);
     expect(r.warnings.map((w) => w.code)).toContain('FREE_DRAINING_PARAMETERS_IGNORED');
   });

@@ -4,7 +4,8 @@ import { integrateCircle } from './boussinesq-reference';
 
 describe('uniformly loaded circle', () => {
   it('gives 0.6464q below the centre at z = a', () => {
-    // source: q[1 − (1 + (a/z)²)^(−3/2)], value at z = a [computed] in consolidation-sources.md §6
+    // source: Boussinesq (1885) integrated over a circle, q[1 − (1 + (a/z)²)^(−3/2)] (e.g. Poulos & Davis 1974,
+    // from memory); worked by hand at z = a: 1 − 2^(−3/2) = 0.64645
     expect(circleCentreStressKpa(1, 2, 2)).toBeCloseTo(0.6464, 4);
   });
 

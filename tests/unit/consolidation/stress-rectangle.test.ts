@@ -3,7 +3,10 @@ import { cornerInfluenceFactor, rectangleStressKpa } from '../../../src/lib/cons
 import { twoToOneStressKpa } from '../../../src/lib/consolidation/stress-two-to-one';
 import { integrateRectangle } from './boussinesq-reference';
 
-// source: Newmark (1935) corner formula; Fadum (1948) chart; Iz values [computed] in consolidation-sources.md §6.
+// source: Newmark (1935) corner formula, Boussinesq (1885) integrated over a rectangle; Fadum (1948) charts the
+// same Iz. Values: Newmark's formula evaluated with mpmath 1.3 and confirmed by integrating the Boussinesq point
+// load numerically (mpmath.quad), rounded to 4 decimals; textbook tables of Fadum's factor give the same
+// (e.g. 0.1752 at m = n = 1; from memory).
 const fadum: Array<[number, number, number]> = [
   [0.1, 0.1, 0.0047],
   [0.25, 0.25, 0.027],
@@ -24,7 +27,8 @@ describe('rectangle corner influence factor (Fadum)', () => {
   });
 
   it('tends to 0.25 for an infinite corner', () => {
-    // source: consolidation-sources.md §6, Iz(∞) = 0.2500
+    // source: limit of Newmark's (1935) formula as m, n → ∞; worked by hand: the four quarter-planes of an
+    // infinite loaded area add up to q (Boussinesq 1885), so each corner gives q/4
     expect(cornerInfluenceFactor(1e7, 1e7)).toBeCloseTo(0.25, 6);
     expect(cornerInfluenceFactor(Number.POSITIVE_INFINITY, Number.POSITIVE_INFINITY)).toBe(0.25);
   });
@@ -36,7 +40,8 @@ describe('rectangle corner influence factor (Fadum)', () => {
 
 describe('rectangle at any point by superposition', () => {
   it('gives 0.701q below the centre of a 2 × 2 m footing at 1 m, against 0.444q by the 2:1 method', () => {
-    // source: consolidation-sources.md §6 [computed]: Boussinesq 0.701q vs 2:1 0.444q
+    // source: four corners of 1 × 1 m at z = 1 m, 4 × Iz(1, 1) = 4 × 0.17522 = 0.7009 (Newmark 1935, value
+    // above); 2:1 method q·B·L/((B + z)(L + z)) = 4/9 = 0.444 (common practice; worked by hand)
     expect(rectangleStressKpa(100, 2, 2, 0, 0, 1) / 100).toBeCloseTo(0.701, 3);
     expect(twoToOneStressKpa(100, 'rectangle', 2, 2, 1) / 100).toBeCloseTo(0.444, 3);
   });

@@ -20,7 +20,7 @@ function misfit(degrees: ArrayLike<number>, tvs: readonly number[], series: (tv:
 
 describe('Crank–Nicolson layered solver', () => {
   it('matches the Terzaghi series within 0.5 % over the whole curve for a single layer, both drainage cases (property)', () => {
-    // source: Terzaghi (1943) series; acceptance rule of issue 4 (0.5 %)
+    // source: Terzaghi (1943) series; the 0.5 % tolerance is our own accuracy target for the solver, not a published one
     fc.assert(
       fc.property(
         fc.double({ min: 0.05, max: 50, noNaN: true }),

@@ -10,8 +10,8 @@ import {
   wellResistanceMean,
 } from '../../../src/lib/consolidation/vertical-drains';
 
-// source: Barron (1948); UFC 3-220-10 Eq. 5-23 and its approximation ln n − 0.75;
-// F(n) exact/approx check values [computed] in consolidation-sources.md §6.
+// source: Barron (1948) Trans. ASCE 113:718–742, F(n) = n²/(n² − 1)·ln n − (3n² − 1)/(4n²), and its
+// approximation ln n − 0.75 (UFC 3-220-10 (2022) Eq. 5-23); both evaluated with mpmath 1.3, rounded to 4 decimals.
 const barron: Array<[number, number, number]> = [
   [5, 0.9365, 0.8594],
   [10, 1.5783, 1.5526],
@@ -26,7 +26,8 @@ describe('vertical drains', () => {
   });
 
   it('uses de = 1.128·S (square) and 1.05·S (triangular)', () => {
-    // source: the 1.128 S / 1.05 S; UFC 3-220-10 §5-6 (1.13 S, 1.05 S, from memory)
+    // source: equal plan area per drain, Barron (1948); Hansbo (1981) quotes 1.13 S and 1.05 S (from memory).
+    // Worked by hand: π·de²/4 = S² → de = 2S/√π = 1.1284 S; π·de²/4 = (√3/2)·S² → de = S·√(2√3/π) = 1.0501 S
     expect(influenceDiameterM(2, 'square') / 2).toBeCloseTo(1.128, 3);
     expect(influenceDiameterM(2, 'triangular') / 2).toBeCloseTo(1.05, 3);
   });

@@ -8,7 +8,7 @@ import { KPA_PER_PSF } from '../../../src/lib/import/units';
 import { validateRows } from '../../../src/lib/import/validate-rows';
 import { fixture, importCsv, VOCABULARY } from '../../fixtures/import/pipeline';
 
-// One test per file the issue names; each checks the outcome and a key phrase of the message.
+// One test per kind of file the README's upload rules name; each checks the outcome and a key phrase of the message.
 describe('the files an upload must handle', () => {
   it('good CSV: every row valid', () => {
     const result = importCsv(fixture('good.csv'));
