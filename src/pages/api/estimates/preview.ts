@@ -18,9 +18,7 @@ export const POST = handleApi(async (context) => {
     return json(previewEstimate(input));
   } catch (error) {
     if (error instanceof EngineInputError) {
-      throw new ApiError('UNPROCESSABLE', `The profile cannot be computed: ${error.message}`, [
-        { path: error.fieldPath, message: error.message },
-      ]);
+      throw new ApiError('UNPROCESSABLE', `The profile cannot be computed: ${error.message}`, [...error.issues]);
     }
     throw error;
   }
