@@ -3,6 +3,7 @@ import node from '@astrojs/node';
 import react from '@astrojs/react';
 import tailwind from '@astrojs/tailwind';
 import { defineConfig, envField } from 'astro/config';
+import { previewWorker } from './src/integrations/preview-worker.mjs';
 
 // Every variable is a server secret so it is read when the server starts, not baked into the build:
 // one build runs anywhere, configured by its environment.
@@ -13,7 +14,7 @@ export default defineConfig({
   adapter: node({ mode: 'standalone' }),
   outDir: process.env.CLAYBANK_BUILD_DIR ?? './dist',
   server: { host: '127.0.0.1', port: 4321 },
-  integrations: [react(), tailwind({ applyBaseStyles: false, configFile: './src/styles/tailwind.config.mjs' })],
+  integrations: [react(), tailwind({ applyBaseStyles: false, configFile: './src/styles/tailwind.config.mjs' }), previewWorker()],
   devToolbar: { enabled: false },
   // Origins are checked in src/middleware.ts against APP_URL, read at run time, so one build serves
   // any host name; Astro's own check compares with the Host header, which a proxy may rewrite.

@@ -8,3 +8,9 @@ declare namespace App {
     identity: import('./lib/server/auth/resolve-actor').ResolvedIdentity | null;
   }
 }
+
+declare module 'virtual:claybank/preview-worker' {
+  /** File URL of the preview worker entry (see src/integrations/preview-worker.mjs). */
+  const url: string;
+  export default url;
+}

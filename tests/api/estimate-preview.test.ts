@@ -1,9 +1,10 @@
 // POST /api/estimates/preview: the route answers with the engine's own numbers, refuses bad input
 // field by field, and saves nothing.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { readmePreviewExample } from '../../scripts/lib/readme-preview-example.mjs';
 import { previewEstimate } from '../../src/lib/consolidation';
 import { estimatePreviewSchema } from '../../src/lib/schemas/estimate-preview';
-import { call, db, firmIdOf, inTenantTransaction, sessionCookie, userIdOf } from './support/world';
+import { base, call, db, firmIdOf, inTenantTransaction, sessionCookie, userIdOf } from './support/world';
 
 let engineer = '';
 beforeAll(async () => {
@@ -70,6 +71,36 @@ describe('POST /api/estimates/preview', () => {
     const paths = error.issues.map((issue) => issue.path);
     expect(paths).toEqual(expect.arrayContaining(['layers.0.thickness', 'layers.0.cc', 'drainage.bottom']));
     expect(JSON.stringify(error.issues)).toContain('firmId');
+  });
+
+  it('refuses a physically impossible profile with 422 and every field named', async () => {
+    const impossible = {
+      ...PROFILE,
+      waterTableDepth: 1,
+      layers: [{ ...PROFILE.layers[0], unitWeightBelowWater: 9.5, cr: 0.95 }],
+    };
+    const result = await call('POST', '/api/estimates/preview', engineer, impossible);
+    expect(result.status).toBe(422);
+    const error = (result.body as { error: { code: string; message: string; issues: { path: string; message: string }[] } })
+      .error;
+    expect(error.code).toBe('UNPROCESSABLE');
+    expect(error.issues.map((issue) => issue.path)).toEqual(['layers.0.unitWeightBelowWater', 'layers.0.cr']);
+    expect(error.issues[0]?.message).toContain('must be greater than that of water (9.81 kN/m³)');
+    expect(error.message).toMatch(/^The profile cannot be computed: /);
+  });
+
+  it("answers the README's example from the worker pool with the engine's numbers and no caching", async () => {
+    const example = readmePreviewExample();
+    const response = await fetch(`${base}/api/estimates/preview`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', cookie: engineer, origin: base },
+      body: JSON.stringify(example),
+    });
+    expect(response.status).toBe(200);
+    expect(response.headers.get('content-type')).toBe('application/json; charset=utf-8');
+    expect(response.headers.get('cache-control')).toBe('no-store');
+    const expected = JSON.parse(JSON.stringify(previewEstimate(estimatePreviewSchema.parse(example))));
+    expect(await response.json()).toEqual(expected);
   });
 
   it("saves nothing (counted inside the engineer's firm, where its estimates are visible)", async () => {

@@ -4,7 +4,7 @@
  * modules (lab interpretation, statistics) and for tests.
  */
 export { STANDING_CAUTIONS } from './cautions';
-export { EngineInputError } from './errors';
+export { EngineInputError, type InputIssue } from './errors';
 export { excessPorePressureRatio } from './isochrones';
 export { CURVE_POINTS, previewEstimate } from './preview';
 export type {

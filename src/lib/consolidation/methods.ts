@@ -57,7 +57,7 @@ export function methodsUsed(det: DeterministicResult, ranges: MonteCarloSummary 
   }
   if (ranges) {
     methods.push(
-      `Ranges: seeded Monte Carlo, ${ranges.realisations} realisations, seed ${ranges.seed}; xoshiro128** generator, Box–Muller normals, Gaussian copula for the Cc–e0 correlation; P10/P50/P90 by linear interpolation of order statistics (Hyndman & Fan type 7).`,
+      `Ranges: seeded Monte Carlo, ${ranges.realisations} realisations, seed ${ranges.seed}; xoshiro128** generator, Box–Muller normals, Gaussian copula for the Cc–e0 correlation; given P10/P50/P90 triples sampled through all three points (Johnson quantile-parameterized distribution, Hadlock & Bickel 2017); a realisation's Cr capped at its Cc; result P10/P50/P90 by linear interpolation of order statistics (Hyndman & Fan type 7).`,
       "Ranges over time: each layer's curve rescaled by its drainage group's equivalent-layer time (UFC 3-220-10 Eqs. 5-16, 5-17) — exact for one layer, approximate for layers with different cv.",
       'The likely (deterministic) estimate uses the median of every distribution.',
     );

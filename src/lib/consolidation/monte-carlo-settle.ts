@@ -21,7 +21,8 @@ export function settleLayer(plan: MonteCarloPlan, li: number, col: LayerColumns,
     return (col.mv[r] as number) * layer.stressAreaKpaM;
   }
   const cc = col.cc[r] as number;
-  const cr = col.cr[r] as number;
+  // Cr is refused at or above Cc for the medians; a realisation drawn from overlapping ranges is capped at its Cc.
+  const cr = Math.min(col.cr[r] as number, cc);
   const a = cc * inv;
   const b = cr * inv;
   const add = layer.scalarPreconsolidation ? Math.log10(col.preconsolidation[r] as number) : 0;

@@ -4,11 +4,13 @@
  * with every distribution at its median, runs the seeded Monte Carlo when any parameter has a
  * spread, and returns everything in the request's unit system with the methods used, warnings
  * and standing cautions. Pure and synchronous; throws `EngineInputError` for inputs that pass the
- * schema but are physically impossible.
+ * schema but are physically impossible (input-checks.ts), with every offending field.
  */
 import type { EstimatePreviewInput } from '../schemas/estimate-preview';
 import { STANDING_CAUTIONS } from './cautions';
 import { type DeterministicResult, runDeterministic } from './deterministic';
+import { EngineInputError } from './errors';
+import { impossibleInputIssues, impossibleResultIssues } from './input-checks';
 import { toEngineInput } from './input-conversion';
 import { methodsUsed } from './methods';
 import { runMonteCarlo } from './monte-carlo';
@@ -42,7 +44,11 @@ export function curveTimesYears(det: DeterministicResult): number[] {
 export function previewEstimate(request: EstimatePreviewInput): EstimatePreviewResult {
   const input = toEngineInput(request);
   const factors = unitFactors(request.unitSystem);
+  const inputIssues = impossibleInputIssues(input, factors);
+  if (inputIssues.length) throw EngineInputError.of(inputIssues);
   const det = runDeterministic(input);
+  const resultIssues = impossibleResultIssues(det);
+  if (resultIssues.length) throw EngineInputError.of(resultIssues);
   const curveTimes = curveTimesYears(det);
   const userTimes = input.timePointsYears;
 

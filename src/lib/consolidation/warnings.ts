@@ -1,12 +1,12 @@
 /**
  * Warnings about values outside usual ranges and about method limits. Codes (closed list):
- * CC_ABOVE_USUAL, CR_NOT_BELOW_CC, E0_OUTSIDE_USUAL, CV_OUTSIDE_USUAL, OCR_BELOW_ONE,
+ * CC_ABOVE_USUAL, E0_OUTSIDE_USUAL, CV_OUTSIDE_USUAL, OCR_BELOW_ONE,
  * C_ALPHA_RATIO_OUTSIDE_USUAL, FREE_DRAINING_PARAMETERS_IGNORED, SUBLAYERS_NOT_CONVERGED,
  * SMALL_STRESS_INCREASE, HIGH_STRESS_RATIO, TWO_TO_ONE_APPROXIMATE, ELASTIC_STRESS_IN_LAYERED_GROUND,
  * DESIGN_LIFE_BEFORE_END_OF_PRIMARY, DESIGN_LIFE_DEFAULTED, CONSTRUCTION_LONGER_THAN_DESIGN_LIFE,
  * DRAIN_SPACING_RATIO_LOW, DISTRIBUTION_TRUNCATED, MV_STRESS_RANGE.
  * Usual ranges: Cc ≤ 3, e0 0.2–15, cv 0.01–1000 m²/yr (as the issue sets them); Cα/Cc 0.025–0.085
- * (Mesri & Godlewski 1977); Cr below Cc (UFC 3-220-10 §5-5.2.1: Cr typically 5–10 % of Cc).
+ * (Mesri & Godlewski 1977). Impossible inputs (Cr not below Cc, …) are refused in input-checks.ts.
  */
 import type { DeterministicResult } from './deterministic';
 import type { MonteCarloSummary } from './monte-carlo-summary';
@@ -37,12 +37,6 @@ export function collectWarnings(
         'CC_ABOVE_USUAL',
         at('cc'),
         `${label}: Cc = ${fmt(v.cc)} is above the usual upper bound of about 3 (peats can exceed it). Check the value.`,
-      );
-    if (v.cr >= v.cc)
-      add(
-        'CR_NOT_BELOW_CC',
-        at('cr'),
-        `${label}: Cr (${fmt(v.cr)}) is not below Cc (${fmt(v.cc)}); Cr is typically 5–10 % of Cc.`,
       );
     if (v.e0 < 0.2 || v.e0 > 15)
       add('E0_OUTSIDE_USUAL', at('e0'), `${label}: e0 = ${fmt(v.e0)} is outside the usual range 0.2–15.`);

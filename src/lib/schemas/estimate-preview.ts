@@ -45,8 +45,8 @@ const nonNegativeNumber = (what: string) =>
  * - lognormal: arithmetic mean and sd of the quantity itself (not of its logarithm); the usual
  *   choice for cv, ch and permeability.
  * - triangular: min ≤ mode ≤ max.
- * - p10p50p90: the bank's 10th, 50th and 90th percentiles; the engine fits a normal (symmetric),
- *   log-normal (skewed to high values) or split normal (skewed to low values) distribution.
+ * - p10p50p90: the bank's 10th, 50th and 90th percentiles; the engine samples a distribution
+ *   that passes through all three (Johnson quantile-parameterized, Hadlock & Bickel 2017).
  */
 function distributionSchema(what: string, allowZero: boolean) {
   const centre = allowZero ? nonNegativeNumber : positiveNumber;

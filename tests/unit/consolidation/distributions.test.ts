@@ -31,28 +31,52 @@ describe('parameter distributions', () => {
     expect(sd / 1.2).toBeCloseTo(1, 1);
   });
 
-  it('fits P10/P50/P90: roughly symmetric → normal with mean P50 and sd from the P10–P90 span', () => {
-    const d = fitPercentiles(96, 100, 104.5);
-    expect(d.kind).toBe('normal');
-    expect(valueAtScore(d, -Z90)).toBeCloseTo(95.75, 12);
-    expect(valueAtScore(d, 0)).toBeCloseTo(100, 12);
-    expect(valueAtScore(d, Z90)).toBeCloseTo(104.25, 12);
+  // source: Hadlock & Bickel (2017), Decision Analysis 14(1):35–64 — J-QPD-S passes through the
+  // given 10th, 50th and 90th percentiles by construction; here checked against the definition of
+  // a percentile (Q(Φ(∓1.2816)) = P10, P90, Q(Φ(0)) = P50), for every shape of triple.
+  it.each([
+    ['skewed to high values', 0.4, 0.5, 0.7, 'johnsonQpd'],
+    ['skewed to low values', 700, 900, 1000, 'johnsonQpd'],
+    ['nearly symmetric', 96, 100, 104.5, 'johnsonQpd'],
+    ['very wide', 0.01, 1, 2, 'johnsonQpd'],
+    ['symmetric in ln space', 1, 2, 4, 'lognormal'],
+    ['tied P10 = P50', 0.5, 0.5, 0.7, 'twoPiece'],
+    ['tied P50 = P90', 0.3, 0.5, 0.5, 'twoPiece'],
+    ['P10 = 0 (a value that may be 0)', 0, 0.02, 0.05, 'twoPiece'],
+  ] as const)('fits P10/P50/P90 %s through all three percentiles', (_, p10, p50, p90, kind) => {
+    const d = fitPercentiles(p10, p50, p90);
+    expect(d.kind).toBe(kind);
+    expect(valueAtScore(d, -Z90)).toBeCloseTo(p10, 12);
+    expect(valueAtScore(d, 0)).toBeCloseTo(p50, 12);
+    expect(valueAtScore(d, Z90)).toBeCloseTo(p90, 12);
+    expect(medianOf(d)).toBeCloseTo(p50, 12);
   });
 
-  it('fits P10/P50/P90: skewed to high values → log-normal with median P50 and the P10–P90 log spread', () => {
-    const d = fitPercentiles(1, 2, 4);
-    expect(d.kind).toBe('lognormal');
-    expect(valueAtScore(d, -Z90)).toBeCloseTo(1, 12);
-    expect(medianOf(d)).toBeCloseTo(2, 12);
-    expect(valueAtScore(d, Z90)).toBeCloseTo(4, 12);
+  it.each([
+    [0.4, 0.5, 0.7],
+    [700, 900, 1000],
+    [0.01, 1, 2],
+    [0, 0.02, 0.05],
+  ])('samples P10/P50/P90 %s, %s, %s with those percentiles (empirical CDF within 4 standard errors)', (p10, p50, p90) => {
+    // source: sample fraction below a true p-quantile has sd √(p(1−p)/n) (binomial count, standard result).
+    const n = 200_000;
+    const values = sample({ type: 'p10p50p90', p10, p50, p90 }, n);
+    const fractionBelow = (x: number) => values.filter((v) => v <= x).length / n;
+    const bound = (p: number) => 4 * Math.sqrt((p * (1 - p)) / n);
+    expect(Math.abs(fractionBelow(p10) - 0.1)).toBeLessThan(bound(0.1));
+    expect(Math.abs(fractionBelow(p50) - 0.5)).toBeLessThan(bound(0.5));
+    expect(Math.abs(fractionBelow(p90) - 0.9)).toBeLessThan(bound(0.9));
+    expect(values.every((v) => v >= 0 && Number.isFinite(v))).toBe(true);
   });
 
-  it('fits P10/P50/P90: skewed to low values → split normal through all three', () => {
-    const d = fitPercentiles(700, 900, 1000);
-    expect(d.kind).toBe('splitNormal');
-    expect(valueAtScore(d, -Z90)).toBeCloseTo(700, 9);
-    expect(valueAtScore(d, 0)).toBeCloseTo(900, 12);
-    expect(valueAtScore(d, Z90)).toBeCloseTo(1000, 9);
+  it('gives a smooth, increasing quantile function for a skewed triple (no kink at P50)', () => {
+    const d = fitPercentiles(0.4, 0.5, 0.7);
+    const zs = Array.from({ length: 801 }, (_, i) => -4 + i / 100);
+    const q = zs.map((z) => valueAtScore(d, z));
+    for (let i = 1; i < q.length; i++) expect(q[i] as number).toBeGreaterThan(q[i - 1] as number);
+    // slope just below and just above z = 0 agree (the two-piece forms have a jump in slope there)
+    const slope = (z: number) => (valueAtScore(d, z + 1e-6) - valueAtScore(d, z - 1e-6)) / 2e-6;
+    expect(slope(-1e-4) / slope(1e-4)).toBeCloseTo(1, 3);
   });
 
   it('gives the triangular median and CDF', () => {

@@ -88,7 +88,6 @@ describe('previewEstimate', () => {
   it('warns about values outside the usual ranges', () => {
     const codes = (body: EstimatePreviewBody) => preview(body).warnings.map((w) => w.code);
     expect(codes(singleClay({ cc: 3.5, cr: 0.3 }))).toContain('CC_ABOVE_USUAL');
-    expect(codes(singleClay({ cr: 0.7 }))).toContain('CR_NOT_BELOW_CC');
     expect(codes(singleClay({ e0: 16 }))).toContain('E0_OUTSIDE_USUAL');
     expect(codes(singleClay({ cv: 0.005 }))).toContain('CV_OUTSIDE_USUAL');
     expect(codes(singleClay({ cv: 2000 }))).toContain('CV_OUTSIDE_USUAL');

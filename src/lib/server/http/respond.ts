@@ -11,6 +11,11 @@ export function json(data: unknown, status = 200, headers: Record<string, string
   });
 }
 
+/** A 200 answer whose body is already JSON text (e.g. serialised in a worker thread). */
+export function jsonText(text: string, status = 200): Response {
+  return new Response(text, { status, headers: { 'content-type': 'application/json; charset=utf-8', ...NO_STORE } });
+}
+
 export function errorResponse(
   code: ErrorCode,
   message: string,

@@ -1,27 +1,18 @@
-import { EngineInputError, previewEstimate } from '../../../lib/consolidation';
 import { estimatePreviewSchema } from '../../../lib/schemas/estimate-preview';
-import { ApiError } from '../../../lib/server/http/api-error';
+import { previewInWorker } from '../../../lib/server/estimates/preview-service';
 import { requirePermission } from '../../../lib/server/http/guards';
-import { handleApi, json, readJsonBody } from '../../../lib/server/http/respond';
+import { handleApi, jsonText, readJsonBody } from '../../../lib/server/http/respond';
 
 export const prerender = false;
 
 /**
  * Settlement and time-rate preview of a layered profile (see the README's API section). Nothing is
  * saved. 400 with per-field issues when the body does not fit the schema; 422 when it fits but is
- * physically impossible.
+ * physically impossible; 503 with Retry-After when the preview workers' queue is full. The engine
+ * runs in a worker thread, never on the event loop.
  */
 export const POST = handleApi(async (context) => {
   await requirePermission(context, 'estimate', 'create');
   const input = await readJsonBody(context.request, estimatePreviewSchema);
-  try {
-    return json(previewEstimate(input));
-  } catch (error) {
-    if (error instanceof EngineInputError) {
-      throw new ApiError('UNPROCESSABLE', `The profile cannot be computed: ${error.message}`, [
-        { path: error.fieldPath, message: error.message },
-      ]);
-    }
-    throw error;
-  }
+  return jsonText(await previewInWorker(input, context.request.signal));
 });
