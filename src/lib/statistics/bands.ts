@@ -1,7 +1,10 @@
 /**
  * Confidence band of the mean response and prediction band of a new observation about a fitted line,
  * ŷ ± t(1 − α/2, n − 2)·s·√(1/n + (x − x̄)²/Sxx) and ŷ ± t·s·√(1 + 1/n + (x − x̄)²/Sxx). Source:
- * Draper & Smith (1998), Applied Regression Analysis, 3rd ed., §1.4 (from memory).
+ * Draper & Smith (1998), Applied Regression Analysis, 3rd ed., §1.4 (from memory). For a fit through
+ * masked values the line's uncertainty uses the estimation sd s_e and the scatter of a new true value
+ * the residual sd s: ŷ ± t·s_e·√h and ŷ ± t·√(s² + s_e²·h), h = 1/n + (x − x̄)²/Sxx; both reduce to the
+ * formulas above when s_e = s.
  */
 import type { LinearFit } from './regression';
 import { twoSidedT } from './student-t';
@@ -21,8 +24,8 @@ export function regressionBands(fit: LinearFit, xs: readonly number[], level = 0
   return xs.map((x) => {
     const y = fit.intercept + fit.slope * x;
     const leverage = 1 / fit.n + (x - fit.xMean) ** 2 / fit.sxx;
-    const confidence = t * fit.residualSd * Math.sqrt(leverage);
-    const prediction = t * fit.residualSd * Math.sqrt(1 + leverage);
+    const confidence = t * fit.estimationSd * Math.sqrt(leverage);
+    const prediction = t * Math.sqrt(fit.residualSd ** 2 + fit.estimationSd ** 2 * leverage);
     return {
       x,
       fit: y,

@@ -80,7 +80,7 @@ export const PARAMETERS: Readonly<Record<ParameterKey, ParameterDefinition>> = {
   liquidLimitPct: define('liquidLimitPct', 'LL', 'liquid limit', '%', 'linear', 0x1002, 0.15),
   plasticLimitPct: define('plasticLimitPct', 'PL', 'plastic limit', '%', 'linear', 0x1003, 0.15),
   plasticityIndexPct: define('plasticityIndexPct', 'PI', 'plasticity index', '%', 'linear', 0x1004, 0.25),
-  specificGravity: define('specificGravity', 'Gs', 'specific gravity of solids', '', 'linear', 0x1005, 0.03),
+  specificGravity: define('specificGravity', 'Gs', 'specific gravity of solids', '', 'linear', 0x1005, 0.015),
   bulkUnitWeightKnPerM3: define('bulkUnitWeightKnPerM3', 'γ', 'bulk unit weight', 'kN/m³', 'linear', 0x1006, 0.05),
   initialVoidRatio: define('initialVoidRatio', 'e0', 'initial void ratio', '', 'linear', 0x1007, 0.2),
   organicContentPct: define('organicContentPct', 'Corg', 'organic content', '%', 'linear', 0x1008, 0.3),

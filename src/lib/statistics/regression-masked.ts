@@ -4,9 +4,10 @@
  * from memory): noise with known variance σᵢ² in x inflates Sxx by about (1 − 1/n)·Σσᵢ² and flattens
  * the slope; noise in y inflates Syy and the residual sd. The corrected sums are
  * Sxx* = Sxx − (1 − 1/n)Σσx², Syy* = Syy − (1 − 1/n)Σσy², Sxy unchanged (the two noises are
- * independent), and the line is fitted to them. Standard errors and bands then use Sxx* and the
- * corrected residual sd; they leave out the extra uncertainty of estimating with noisy x, which is
- * small while the reliability Sxx* ÷ Sxx is high. Below a reliability of 0.5 the correction is unstable
+ * independent), and the line is fitted to them. R², r and the residual sd describe the true scatter
+ * (corrected sums); the standard errors and the confidence band use the scatter of the masked points
+ * about the corrected line, since the masking noise does make the line less certain (an approximation
+ * of Fuller's variance that is close while the reliability Sxx* ÷ Sxx is high). Below a reliability of 0.5 the correction is unstable
  * and the plain fit is returned, flagged.
  */
 import { fitFromSums, type LinearFit, lineSums } from './regression';
@@ -66,6 +67,7 @@ export function fitMaskedLine(
     syy,
     sxy: sums.sxy,
     sse: syy - slope * sums.sxy,
+    estimationSse: sums.syy - 2 * slope * sums.sxy + slope * slope * sums.sxx,
   });
   return fit ? { fit, reliability, corrected: true } : null;
 }

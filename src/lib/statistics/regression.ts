@@ -16,6 +16,8 @@ export interface LineSums {
   sxy: number;
   /** Residual sum of squares about the fitted line. */
   sse: number;
+  /** Residual sum of squares behind the standard errors, when it differs from `sse` (masked fits). */
+  estimationSse?: number;
 }
 
 export interface LinearFit {
@@ -25,8 +27,14 @@ export interface LinearFit {
   intercept: number;
   slopeStandardError: number;
   interceptStandardError: number;
-  /** s = √(SSE/(n − 2)). */
+  /** s = √(SSE/(n − 2)): the scatter of observations about the line. */
   residualSd: number;
+  /**
+   * The sd behind the standard errors and the confidence band. Equals `residualSd` for a plain fit;
+   * for a fit through masked values it also holds the masking noise, which makes the line itself
+   * less certain even though the scatter of true values about it is smaller (regression-masked.ts).
+   */
+  estimationSd: number;
   r: number;
   rSquared: number;
   xMean: number;
@@ -41,15 +49,17 @@ export function fitFromSums(sums: LineSums): LinearFit | null {
   const intercept = yMean - slope * xMean;
   const sse = Math.max(0, sums.sse);
   const residualSd = Math.sqrt(sse / (n - 2));
+  const estimationSd = sums.estimationSse === undefined ? residualSd : Math.sqrt(Math.max(0, sums.estimationSse) / (n - 2));
   const r = syy > 0 ? Math.max(-1, Math.min(1, sxy / Math.sqrt(sxx * syy))) : 0;
   return {
     n,
     degreesOfFreedom: n - 2,
     slope,
     intercept,
-    slopeStandardError: residualSd / Math.sqrt(sxx),
-    interceptStandardError: residualSd * Math.sqrt(1 / n + (xMean * xMean) / sxx),
+    slopeStandardError: estimationSd / Math.sqrt(sxx),
+    interceptStandardError: estimationSd * Math.sqrt(1 / n + (xMean * xMean) / sxx),
     residualSd,
+    estimationSd,
     r,
     rSquared: syy > 0 ? 1 - sse / syy : 0,
     xMean,
