@@ -45,22 +45,22 @@ function selectRanks(a: Float64Array, ranks: readonly number[], from: number, to
 
 /**
  * Type-7 percentiles (probabilities in [0, 1]) of the first n values of `a` (n ≥ 1), which it
- * reorders. Same results as sorting and interpolating (percentiles.ts).
+ * reorders. Same results as sorting and interpolating (percentiles.ts). Only the lower order
+ * statistic of each percentile is selected; the next one up is the smallest value between it and the
+ * next selected rank, found by one scan.
  */
 export function percentilesBySelection(a: Float64Array, probabilities: readonly number[], n = a.length): number[] {
   const last = n - 1;
-  const wanted = new Set<number>();
-  for (const p of probabilities) {
-    const k = Math.floor(last * p);
-    wanted.add(k);
-    if (k < last) wanted.add(k + 1);
-  }
-  const ranks = [...wanted].sort((x, y) => x - y);
+  const ranks = [...new Set(probabilities.map((p) => Math.floor(last * p)))].sort((x, y) => x - y);
   selectRanks(a, ranks, 0, ranks.length - 1, 0, last);
   return probabilities.map((p) => {
     const h = last * p;
     const k = Math.floor(h);
     const low = a[k] as number;
-    return k >= last ? low : low + (h - k) * ((a[k + 1] as number) - low);
+    if (k >= last || h === k) return low;
+    const bound = ranks.find((r) => r > k) ?? last;
+    let next = Number.POSITIVE_INFINITY;
+    for (let i = k + 1; i <= bound; i++) if ((a[i] as number) < next) next = a[i] as number;
+    return low + (h - k) * (next - low);
   });
 }

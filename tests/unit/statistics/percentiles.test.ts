@@ -47,7 +47,9 @@ describe('weighted percentiles (our type-7 generalisation)', () => {
         }));
         const sorted = Array.from(Float64Array.from(values).sort());
         const got = weightedPercentilesOfRuns(runs, P);
-        P.forEach((p, i) => expect(got[i]).toBeCloseTo(quantileSorted(sorted, p) as number, 6));
+        P.forEach((p, i) => {
+          expect(got[i]).toBeCloseTo(quantileSorted(sorted, p) as number, 6);
+        });
       }),
       { numRuns: 200 },
     );
