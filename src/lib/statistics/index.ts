@@ -74,6 +74,7 @@ export { compareWithPool, percentileRank, tukeyFences } from './pool-comparison'
 export { PUBLISHED_CORRELATIONS, type PublishedCorrelation, publishedCorrelation } from './published-correlations';
 export { DEFAULT_QUALITY_WEIGHTS, type QualityChoice, type QualityOptions } from './quality';
 export { fitLine, type LinearFit } from './regression';
+export { compareSiteValues, type SiteComparison } from './site-comparison';
 export { type SoilGroup, soilGroupOfUscs } from './soil-groups';
 export { type SplitValues, type StressLevel, splitByStressRange, stressLevelRange } from './stress-levels';
 export { type ParameterSummary, summariseParameter, summariseParameters } from './summary';
