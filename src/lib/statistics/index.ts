@@ -78,3 +78,4 @@ export { compareSiteValues, type SiteComparison } from './site-comparison';
 export { type SoilGroup, soilGroupOfUscs } from './soil-groups';
 export { type SplitValues, type StressLevel, splitByStressRange, stressLevelRange } from './stress-levels';
 export { type ParameterSummary, summariseParameter, summariseParameters } from './summary';
+export { filterByValueRanges, type ValueRange, type ValueRanges } from './value-ranges';
