@@ -5,7 +5,8 @@
  * filter applies, the quality weights do not. Lines and bands span the 5th to 95th percentile of x
  * (never the pooled extremes).
  */
-import { type BandPoint, regressionBands } from './bands';
+import type { BandPoint } from './bands';
+import { fromAxis, line, type PublishedLine, publishedLines, toAxis } from './chart-lines';
 import type { StatisticsContext, Withheld } from './context';
 import {
   type AxisScale,
@@ -18,7 +19,6 @@ import { checkDisclosure } from './disclosure';
 import { maskedValues, noiseMoments } from './masking';
 import { percentilesBySelection } from './order-statistics';
 import type { ParameterKey } from './parameters';
-import { PUBLISHED_CORRELATIONS } from './published-correlations';
 import { fitLine, type LinearFit } from './regression';
 import { type AxisNoise, fitMaskedLine } from './regression-masked';
 
@@ -39,17 +39,6 @@ export interface FittedLine {
   xRange: [number, number];
 }
 
-export interface PublishedLine {
-  correlationId: string;
-  source: string;
-  equation: string;
-  x: number[];
-  y: number[];
-  /** The stated range about the line, when one is stated. */
-  low: number[] | null;
-  high: number[] | null;
-}
-
 export interface CorrelationResult {
   pair: CorrelationPair;
   level: number;
@@ -67,9 +56,6 @@ export interface CorrelationOptions {
   lineSteps?: number;
 }
 
-const toAxis = (value: number, scale: AxisScale) => (scale === 'log' ? Math.log10(value) : value);
-const fromAxis = (value: number, scale: AxisScale) => (scale === 'log' ? 10 ** value : value);
-
 function axisNoise(variable: AxisVariable, scale: AxisScale): AxisNoise {
   if (variable === 'depthM') return { kind: 'none' };
   const moments = noiseMoments(variable);
@@ -81,45 +67,6 @@ function axisNoise(variable: AxisVariable, scale: AxisScale): AxisNoise {
 function spanOf(plotted: Float64Array, count: number): [number, number] {
   const [p5, p95] = percentilesBySelection(plotted.slice(0, count), [0.05, 0.95]);
   return [p5 as number, p95 as number];
-}
-
-function steps(range: [number, number], count: number): number[] {
-  return Array.from({ length: count }, (_, j) => range[0] + ((range[1] - range[0]) * j) / (count - 1));
-}
-
-function line(fit: LinearFit, pair: CorrelationPair, range: [number, number], level: number, count: number) {
-  return regressionBands(fit, steps(range, count), level).map((b) => ({
-    x: fromAxis(b.x, pair.xScale),
-    fit: fromAxis(b.fit, pair.yScale),
-    confidenceLow: fromAxis(b.confidenceLow, pair.yScale),
-    confidenceHigh: fromAxis(b.confidenceHigh, pair.yScale),
-    predictionLow: fromAxis(b.predictionLow, pair.yScale),
-    predictionHigh: fromAxis(b.predictionHigh, pair.yScale),
-  }));
-}
-
-function publishedLines(pair: CorrelationPair, range: [number, number] | null, count: number): PublishedLine[] {
-  if (!range) return [];
-  return PUBLISHED_CORRELATIONS.filter((c) => c.chart?.pair === pair.id).flatMap((c) => {
-    const stated = pair.x === 'depthM' ? undefined : c.validity.ranges[pair.x];
-    const from = Math.max(fromAxis(range[0], pair.xScale), stated?.[0] ?? Number.NEGATIVE_INFINITY);
-    const to = Math.min(fromAxis(range[1], pair.xScale), stated?.[1] ?? Number.POSITIVE_INFINITY);
-    if (!(to > from)) return [];
-    const xs = steps([toAxis(from, pair.xScale), toAxis(to, pair.xScale)], count).map((v) => fromAxis(v, pair.xScale));
-    const ys = xs.map((x) => c.evaluate(c.inputs.map((key) => (key === pair.x ? x : (c.chart?.fixed[key] ?? Number.NaN)))));
-    const band = c.statedRange;
-    return [
-      {
-        correlationId: c.id,
-        source: c.source,
-        equation: c.equation,
-        x: xs,
-        y: ys,
-        low: band ? ys.map((y) => y * band.low) : null,
-        high: band ? ys.map((y) => y * band.high) : null,
-      },
-    ];
-  });
 }
 
 export function correlatePair(

@@ -12,6 +12,7 @@ export {
 } from './analyse-selection';
 export { type BandPoint, regressionBands } from './bands';
 export { type CacheKeyInput, type KeyValue, STATISTICS_ALGORITHM_VERSION, statisticsCacheKey } from './cache-key';
+export type { PublishedLine } from './chart-lines';
 export { checkColumns, columnsFromRecords, type SelectionColumns, type StatisticsRecord } from './columns';
 export { type StatisticsContext, type StatisticsOptions, statisticsContext, type Withheld } from './context';
 export {
@@ -19,7 +20,6 @@ export {
   type CorrelationResult,
   correlatePair,
   type FittedLine,
-  type PublishedLine,
   pairParameters,
   type ScatterPoints,
 } from './correlation';
