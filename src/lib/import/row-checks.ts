@@ -79,29 +79,35 @@ function checkRequired(input: TestRecordInput, row: RowInput): void {
     if (input[key] === undefined) row.add(key, message);
 }
 
-function checkGroupSymbol(row: RowInput): UscsSymbol | null {
-  const written = row.text('uscsSymbol');
+/** A value from a closed list, in the bank's spelling; null (and a problem unless blank) when it is not on the list. */
+function checkClosedList<T>(
+  row: RowInput,
+  key: 'uscsSymbol' | 'testMethod',
+  canonical: (written: string) => T | null,
+  refusal: (written: string) => string,
+): T | null {
+  const written = row.text(key);
   if (written === null) return null;
-  const symbol = canonicalUscs(written);
-  if (symbol === null)
-    row.add(
-      'uscsSymbol',
-      `"${written}" is not an ASTM D2487 group symbol; use one such as CL, CH, ML, MH, OL, OH, Pt, CL-ML or SM.`,
-    );
-  return symbol;
+  const value = canonical(written);
+  if (value === null) row.add(key, refusal(written));
+  return value;
 }
 
-function checkTestMethod(row: RowInput): TestMethod | null {
-  const written = row.text('testMethod');
-  if (written === null) return null;
-  const method = canonicalTestMethod(written);
-  if (method === null)
-    row.add(
-      'testMethod',
-      `"${written}" is not a test method Claybank knows; write incremental (or IL) or CRS (constant rate of strain).`,
-    );
-  return method;
-}
+const checkGroupSymbol = (row: RowInput): UscsSymbol | null =>
+  checkClosedList(
+    row,
+    'uscsSymbol',
+    canonicalUscs,
+    (written) => `"${written}" is not an ASTM D2487 group symbol; use one such as CL, CH, ML, MH, OL, OH, Pt, CL-ML or SM.`,
+  );
+
+const checkTestMethod = (row: RowInput): TestMethod | null =>
+  checkClosedList(
+    row,
+    'testMethod',
+    canonicalTestMethod,
+    (written) => `"${written}" is not a test method Claybank knows; write incremental (or IL) or CRS (constant rate of strain).`,
+  );
 
 /** Peat and organic soils (by group symbol or organic content), for which Gs may be lower. */
 function isOrganic(row: RowInput, uscsSymbol: UscsSymbol | null): boolean {
