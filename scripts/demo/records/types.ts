@@ -1,3 +1,4 @@
+import type { NumberFieldKey, TextFieldKey } from '../../../src/lib/import/fields';
 import type { SampleQualityClass } from '../../../src/lib/import/sample-quality';
 import type { DemoIncrement } from './curve';
 
@@ -11,46 +12,7 @@ export type PlantedOutlierKind = 'stress-in-psf' | 'peat-labelled-as-silt' | 'de
  * The import fields of src/lib/import/fields.ts, in the bank's SI units (depth m, stress kPa,
  * cv m²/yr, unit weight kN/m³, mv m²/MN, k m/s, percentages %); null leaves the cell blank.
  */
-export interface DemoRecordFields {
-  projectName: string | null;
-  clientName: string | null;
-  boreholeId: string | null;
-  sampleId: string | null;
-  easting: number | null;
-  northing: number | null;
-  latitude: number | null;
-  longitude: number | null;
-  coordinateSystem: string | null;
-  notes: string | null;
-  region: string | null;
-  geologicalUnit: string | null;
-  locationCell: string | null;
-  depthTop: number | null;
-  depthBottom: number | null;
-  uscsSymbol: string | null;
-  samplingMethod: string | null;
-  waterContentPct: number | null;
-  liquidLimitPct: number | null;
-  plasticLimitPct: number | null;
-  plasticityIndexPct: number | null;
-  specificGravity: number | null;
-  bulkUnitWeight: number | null;
-  initialVoidRatio: number | null;
-  organicContentPct: number | null;
-  testMethod: string | null;
-  testStandard: string | null;
-  compressionIndex: number | null;
-  recompressionIndex: number | null;
-  preconsolidationStress: number | null;
-  verticalEffectiveStress: number | null;
-  overconsolidationRatio: number | null;
-  cvNc: number | null;
-  cvOc: number | null;
-  secondaryCompressionIndex: number | null;
-  mv: number | null;
-  permeability: number | null;
-  deltaEOverE0: number | null;
-}
+export type DemoRecordFields = { [K in TextFieldKey]: string | null } & { [K in NumberFieldKey]: number | null };
 
 /** An invented test record: the import fields plus what a seeder needs beside them. */
 export interface DemoRecord extends DemoRecordFields {

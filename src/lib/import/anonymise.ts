@@ -1,27 +1,28 @@
-import type { TestRecordIncrement, TestRecordRow } from '../schemas/test-record-row';
 import { fieldName, fieldUnitLabel } from './field-labels';
-import { FIELD_BY_KEY, IMPORT_FIELDS } from './fields';
+import {
+  FIELD_BY_KEY,
+  IMPORT_FIELDS,
+  type ImportFieldSpec,
+  type PrivateFieldKey,
+  type SharedFieldKey,
+  type TextFieldKey,
+} from './fields';
 import { identifyingReasons, type PrivateValue } from './identifying-text';
 import { formatValue } from './row-ranges';
 import { SAMPLE_QUALITY_LABELS } from './sample-quality';
+import type { DerivedValue, TestRecordIncrement, TestRecordRow } from './test-record';
 import type { ValidRow } from './validate-rows';
 
-/** What stays with the firm. */
-export interface PrivatePart {
-  projectName: string | null;
-  clientName: string | null;
-  boreholeId: string;
-  sampleId: string | null;
-  easting: number | null;
-  northing: number | null;
-  latitude: number | null;
-  longitude: number | null;
-  coordinateSystem: string | null;
-  notes: string | null;
-}
+/** Values of a checked record that are not fields of the table but are shared: vocabulary ids and the quality class. */
+const SHARED_RESOLVED = ['regionId', 'geologicalUnitId', 'sampleQualityClass'] as const;
 
-/** What enters the shared bank: shared-scope fields, the coarse location cell, derived values and increments. */
-export type SharedPart = Omit<TestRecordRow, keyof PrivatePart | 'derived'> & { increments: TestRecordIncrement[] };
+/** What stays with the firm: every field the field table marks private. */
+export type PrivatePart = Pick<TestRecordRow, PrivateFieldKey>;
+
+/** What enters the shared bank: the fields marked shared (location as the 5 km cell), the vocabulary ids, the quality class and the increments. */
+export type SharedPart = Pick<TestRecordRow, SharedFieldKey | (typeof SHARED_RESOLVED)[number]> & {
+  increments: TestRecordIncrement[];
+};
 
 /** Shared free text that may identify the firm's project or site, for the data steward to look at. */
 export interface AnonymityFlag {
@@ -29,61 +30,72 @@ export interface AnonymityFlag {
   reason: string;
 }
 
-/** Shared text fields that hold free text (the others are checked against closed lists). */
+/**
+ * How a flag names each private text value when shared free text contains it; null where the value is
+ * not looked for. Every private text field must be listed, so a new one is a decision, not an oversight.
+ */
+const PRIVATE_TEXT_NAMES: { readonly [K in PrivateFieldKey & TextFieldKey]: string | null } = {
+  projectName: 'the project name',
+  clientName: 'the client name',
+  boreholeId: 'the borehole id',
+  sampleId: 'the sample id',
+  coordinateSystem: null,
+  notes: null,
+};
+
+/** Shared text fields checked against closed lists; the other shared text fields hold free text. */
+const CLOSED_LIST_FIELDS: readonly SharedFieldKey[] = ['region', 'geologicalUnit', 'locationCell', 'uscsSymbol', 'testMethod'];
 const FREE_TEXT_SHARED = IMPORT_FIELDS.filter(
-  (f) =>
-    f.scope === 'shared' &&
-    f.type === 'text' &&
-    !['region', 'geologicalUnit', 'locationCell', 'uscsSymbol', 'testMethod'].includes(f.key),
+  (f): f is Extract<(typeof IMPORT_FIELDS)[number], { scope: 'shared'; type: 'text' }> =>
+    f.scope === 'shared' && f.type === 'text' && !CLOSED_LIST_FIELDS.includes(f.key),
 ).map((f) => f.key);
 
 /**
- * Splits a valid row into the part that stays private to the firm and the part others see. The shared
- * part never holds project, client, borehole or sample ids, coordinates or notes; its location is the
- * 5 km cell (given, or worked out from easting/northing during validation). Shared free text that looks
- * identifying is flagged, with a reason that does not repeat the private value.
+ * Splits a record by the field table: each listed field goes to the private or the shared part as its
+ * scope says, and the shared part also gets the vocabulary ids and the quality class. Anything else on
+ * the record goes to neither part, so only a field marked shared can ever reach the shared record.
  */
-export function splitRow(validRow: ValidRow): { shared: SharedPart; private: PrivatePart; flags: AnonymityFlag[] } {
-  const {
-    projectName,
-    clientName,
-    boreholeId,
-    sampleId,
-    easting,
-    northing,
-    latitude,
-    longitude,
-    coordinateSystem,
-    notes,
-    derived: _derived,
-    ...sharedFields
-  } = validRow.record;
-  const privatePart: PrivatePart = {
-    projectName,
-    clientName,
-    boreholeId,
-    sampleId,
-    easting,
-    northing,
-    latitude,
-    longitude,
-    coordinateSystem,
-    notes,
-  };
-  const privateValues: PrivateValue[] = [
-    { what: 'the project name', value: projectName },
-    { what: 'the client name', value: clientName },
-    { what: 'the borehole id', value: boreholeId },
-    { what: 'the sample id', value: sampleId },
-  ];
+export function splitByScope(
+  record: object,
+  fields: readonly Pick<ImportFieldSpec, 'key' | 'scope'>[],
+): { shared: Record<string, unknown>; private: Record<string, unknown> } {
+  const values = record as Readonly<Record<string, unknown>>;
+  const shared: Record<string, unknown> = {};
+  const own: Record<string, unknown> = {};
+  for (const field of fields) (field.scope === 'private' ? own : shared)[field.key] = values[field.key] ?? null;
+  for (const key of SHARED_RESOLVED) shared[key] = values[key] ?? null;
+  return { shared, private: own };
+}
+
+/**
+ * Splits a valid row into the part that stays private to the firm and the part others see, by the
+ * field table (`fields`, the import fields unless a test gives another). The shared part never holds a
+ * private field; its location is the 5 km cell (given, or worked out from easting/northing during
+ * validation). Shared free text that looks identifying is flagged, with a reason that does not repeat
+ * the private value.
+ */
+export function splitRow(
+  validRow: ValidRow,
+  fields: readonly Pick<ImportFieldSpec, 'key' | 'scope'>[] = IMPORT_FIELDS,
+): { shared: SharedPart; private: PrivatePart; flags: AnonymityFlag[] } {
+  const parts = splitByScope(validRow.record, fields);
+  const shared = { ...parts.shared, increments: validRow.increments } as SharedPart;
+  const privatePart = parts.private as PrivatePart;
+  return { shared, private: privatePart, flags: identifyingFlags(validRow.record, privatePart) };
+}
+
+function identifyingFlags(record: TestRecordRow, privatePart: PrivatePart): AnonymityFlag[] {
+  const privateValues: PrivateValue[] = [];
+  for (const [key, what] of Object.entries(PRIVATE_TEXT_NAMES) as [keyof typeof PRIVATE_TEXT_NAMES, string | null][])
+    if (what !== null) privateValues.push({ what, value: privatePart[key] });
   const flags: AnonymityFlag[] = [];
   for (const key of FREE_TEXT_SHARED) {
-    const text = (validRow.record as unknown as Record<string, unknown>)[key];
+    const text = record[key];
     if (typeof text !== 'string') continue;
     for (const reason of identifyingReasons(text, privateValues))
       flags.push({ field: key, reason: `${FIELD_BY_KEY.get(key)?.label} ${reason}.` });
   }
-  return { shared: { ...sharedFields, increments: validRow.increments }, private: privatePart, flags };
+  return flags;
 }
 
 export interface SharedViewEntry {
@@ -104,7 +116,7 @@ export function sharedView(validRow: ValidRow): SharedViewEntry[] {
     if (value === null || value === undefined) continue;
     const unit = fieldUnitLabel(field.key);
     const shown = typeof value === 'number' ? `${formatValue(value)}${unit ? ` ${unit}` : ''}` : String(value);
-    const worked = validRow.record.derived.includes(field.key as TestRecordRow['derived'][number]) ? ' (worked out)' : '';
+    const worked = validRow.record.derived.includes(field.key as DerivedValue) ? ' (worked out)' : '';
     entries.push({ field: field.key, label: fieldName(field.key), value: shown + worked });
   }
   if (shared.sampleQualityClass !== null) {

@@ -1,5 +1,5 @@
 import { columnName } from './csv-table';
-import { FIELD_BY_KEY, IMPORT_FIELDS, type ImportFieldKey } from './fields';
+import { FIELD_BY_KEY, IMPORT_FIELDS, type ImportFieldKey, isImportFieldKey } from './fields';
 import { headerParts, rememberKey } from './header-text';
 import { fieldForHeader } from './synonym-index';
 import { parseUnit, siUnit, unitChoice } from './units';
@@ -35,10 +35,6 @@ export interface ColumnMapping {
   missingRequired: ImportFieldKey[];
 }
 
-function isFieldKey(value: unknown): value is ImportFieldKey {
-  return typeof value === 'string' && FIELD_BY_KEY.has(value);
-}
-
 /**
  * Matches each column to an import field: first from the firm's remembered choices for the same header,
  * then by the header's name against each field's label and synonyms (case, punctuation, Greek letters and
@@ -70,7 +66,7 @@ export function autoMapColumns(headers: readonly string[], remembered: Remembere
   const pending: ColumnMatch[] = [];
   for (const match of columns) {
     const choice = Object.hasOwn(remembered, rememberKey(match.header)) ? remembered[rememberKey(match.header)] : undefined;
-    if (choice && (choice.field === null || isFieldKey(choice.field))) {
+    if (choice && (choice.field === null || isImportFieldKey(choice.field))) {
       if (choice.field === null) match.source = 'remembered';
       else claim(match, choice.field, 'remembered');
     } else pending.push(match);

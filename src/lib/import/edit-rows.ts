@@ -21,13 +21,13 @@ export function applyEdits(rows: readonly RawRow[], edits: RowEdits): RawRow[] {
       if (!field || typeof text !== 'string') continue;
       problems = problems.filter((p) => p.field !== key);
       if (field.type === 'text') {
-        values[field.key as keyof typeof values] = text.trim() === '' ? null : text.trim();
+        values[field.key] = text.trim() === '' ? null : text.trim();
         continue;
       }
       const parsed = parseNumberCell(text, { decimalComma: false, percent: key.endsWith('Pct') });
-      if (parsed.ok) values[field.key as keyof typeof values] = parsed.value;
+      if (parsed.ok) values[field.key] = parsed.value;
       else {
-        delete values[field.key as keyof typeof values];
+        delete values[field.key];
         problems = [...problems, { row: raw.row, field: key, message: `${field.label}: ${parsed.message}` }];
       }
     }

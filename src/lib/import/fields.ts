@@ -9,7 +9,8 @@ export type UnitKind = 'length' | 'stress' | 'cv' | 'unitWeight' | 'mv' | 'perme
 export type FieldScope = 'private' | 'shared';
 export type FieldType = 'text' | 'number' | 'integer';
 
-export interface ImportField {
+/** One row of the field table; `key` is widened to the union of the table's keys in `ImportField`. */
+export interface ImportFieldSpec {
   key: string;
   label: string;
   scope: FieldScope;
@@ -22,10 +23,8 @@ export interface ImportField {
   guide: string;
 }
 
-const field = (f: ImportField) => f;
-
 export const IMPORT_FIELDS = [
-  field({
+  {
     key: 'projectName',
     label: 'Project name',
     scope: 'private',
@@ -34,8 +33,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['project', 'project name', 'job', 'job name', 'scheme'],
     guide: 'Stays private to your firm.',
-  }),
-  field({
+  },
+  {
     key: 'clientName',
     label: 'Client',
     scope: 'private',
@@ -44,8 +43,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['client', 'client name', 'employer'],
     guide: 'Stays private to your firm.',
-  }),
-  field({
+  },
+  {
     key: 'boreholeId',
     label: 'Borehole / location id',
     scope: 'private',
@@ -66,8 +65,8 @@ export const IMPORT_FIELDS = [
       'exploratory hole id',
     ],
     guide: 'Your own id; stays private. Used with sample id and depths to find duplicates.',
-  }),
-  field({
+  },
+  {
     key: 'sampleId',
     label: 'Sample id',
     scope: 'private',
@@ -86,8 +85,8 @@ export const IMPORT_FIELDS = [
       'specimen ref',
     ],
     guide: 'Stays private.',
-  }),
-  field({
+  },
+  {
     key: 'easting',
     label: 'Easting',
     scope: 'private',
@@ -96,8 +95,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['easting', 'x', 'loca_nate', 'e'],
     guide: 'Exact coordinates stay private; the shared record gets a 5 km cell.',
-  }),
-  field({
+  },
+  {
     key: 'northing',
     label: 'Northing',
     scope: 'private',
@@ -106,8 +105,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['northing', 'y', 'loca_natn', 'n'],
     guide: 'Exact coordinates stay private.',
-  }),
-  field({
+  },
+  {
     key: 'latitude',
     label: 'Latitude',
     scope: 'private',
@@ -116,8 +115,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['latitude', 'lat', 'loca_lat'],
     guide: 'Decimal degrees; stays private. Give easting/northing or a location cell for the shared 5 km cell.',
-  }),
-  field({
+  },
+  {
     key: 'longitude',
     label: 'Longitude',
     scope: 'private',
@@ -126,8 +125,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['longitude', 'lon', 'long', 'loca_lon'],
     guide: 'Decimal degrees; stays private.',
-  }),
-  field({
+  },
+  {
     key: 'coordinateSystem',
     label: 'Coordinate system',
     scope: 'private',
@@ -136,8 +135,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['coordinate system', 'grid', 'crs', 'loca_gref'],
     guide: 'Stays private.',
-  }),
-  field({
+  },
+  {
     key: 'notes',
     label: 'Notes',
     scope: 'private',
@@ -146,8 +145,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['notes', 'remarks', 'comments', 'description'],
     guide: 'Free text; stays private.',
-  }),
-  field({
+  },
+  {
     key: 'region',
     label: 'Region',
     scope: 'shared',
@@ -156,8 +155,8 @@ export const IMPORT_FIELDS = [
     required: true,
     synonyms: ['region', 'area', 'district'],
     guide: 'A region name from the bank vocabulary.',
-  }),
-  field({
+  },
+  {
     key: 'geologicalUnit',
     label: 'Geological unit',
     scope: 'shared',
@@ -166,8 +165,8 @@ export const IMPORT_FIELDS = [
     required: true,
     synonyms: ['geological unit', 'unit', 'geology', 'stratum', 'formation', 'deposit', 'geol_geol'],
     guide: 'A geological unit name from the bank vocabulary.',
-  }),
-  field({
+  },
+  {
     key: 'locationCell',
     label: 'Location cell',
     scope: 'shared',
@@ -176,8 +175,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['location cell', 'cell', 'grid cell', '5 km cell'],
     guide: 'E12-N07 style 5 km cell; worked out from easting/northing when blank.',
-  }),
-  field({
+  },
+  {
     key: 'depthTop',
     label: 'Depth top',
     scope: 'shared',
@@ -186,8 +185,8 @@ export const IMPORT_FIELDS = [
     required: true,
     synonyms: ['depth top', 'top depth', 'top', 'depth from', 'samp_top', 'from'],
     guide: 'Below ground level; 0 or more.',
-  }),
-  field({
+  },
+  {
     key: 'depthBottom',
     label: 'Depth bottom',
     scope: 'shared',
@@ -196,8 +195,8 @@ export const IMPORT_FIELDS = [
     required: true,
     synonyms: ['depth bottom', 'bottom depth', 'base', 'depth to', 'samp_base', 'to'],
     guide: 'Greater than depth top.',
-  }),
-  field({
+  },
+  {
     key: 'uscsSymbol',
     label: 'ASTM D2487 group symbol',
     scope: 'shared',
@@ -206,8 +205,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['uscs', 'group symbol', 'soil class', 'classification', 'astm d2487'],
     guide: 'CL, CH, ML, MH, OL, OH, Pt, CL-ML, SM …',
-  }),
-  field({
+  },
+  {
     key: 'samplingMethod',
     label: 'Sampling method',
     scope: 'shared',
@@ -216,8 +215,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['sampling method', 'sampler', 'sample type', 'samp_type'],
     guide: 'e.g. piston, thin-wall open-drive, block.',
-  }),
-  field({
+  },
+  {
     key: 'waterContentPct',
     label: 'wn (%)',
     scope: 'shared',
@@ -235,8 +234,8 @@ export const IMPORT_FIELDS = [
       'lnmc_mc',
     ],
     guide: 'Natural water content, %.',
-  }),
-  field({
+  },
+  {
     key: 'liquidLimitPct',
     label: 'LL (%)',
     scope: 'shared',
@@ -245,8 +244,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['ll', 'liquid limit', 'wl', 'llpl_ll'],
     guide: 'Liquid limit, % (10–500).',
-  }),
-  field({
+  },
+  {
     key: 'plasticLimitPct',
     label: 'PL (%)',
     scope: 'shared',
@@ -255,8 +254,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['pl', 'plastic limit', 'wp', 'llpl_pl'],
     guide: 'Plastic limit, % (not above LL).',
-  }),
-  field({
+  },
+  {
     key: 'plasticityIndexPct',
     label: 'PI (%)',
     scope: 'shared',
@@ -265,8 +264,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['pi', 'plasticity index', 'ip', 'llpl_pi'],
     guide: 'Plasticity index, % (0 or more); worked out as LL − PL when blank.',
-  }),
-  field({
+  },
+  {
     key: 'specificGravity',
     label: 'Gs',
     scope: 'shared',
@@ -275,8 +274,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['gs', 'specific gravity', 'particle density', 'lpdn_pden'],
     guide: 'Specific gravity of solids.',
-  }),
-  field({
+  },
+  {
     key: 'bulkUnitWeight',
     label: 'Bulk unit weight',
     scope: 'shared',
@@ -285,8 +284,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['bulk unit weight', 'unit weight', 'gamma', 'bulk density weight'],
     guide: 'Bulk unit weight.',
-  }),
-  field({
+  },
+  {
     key: 'initialVoidRatio',
     label: 'e0',
     scope: 'shared',
@@ -295,8 +294,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['e0', 'eo', 'initial void ratio', 'initial voids ratio', 'void ratio', 'cong_ivr'],
     guide: 'Initial void ratio (0.2–15).',
-  }),
-  field({
+  },
+  {
     key: 'organicContentPct',
     label: 'Organic content (%)',
     scope: 'shared',
@@ -305,8 +304,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['organic content', 'loi', 'loss on ignition', 'organic'],
     guide: '% by mass.',
-  }),
-  field({
+  },
+  {
     key: 'testMethod',
     label: 'Test method',
     scope: 'shared',
@@ -315,8 +314,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['test method', 'method', 'test type', 'loading method', 'cong_type'],
     guide: 'incremental or CRS.',
-  }),
-  field({
+  },
+  {
     key: 'testStandard',
     label: 'Test standard',
     scope: 'shared',
@@ -325,8 +324,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['standard', 'test standard', 'specification'],
     guide: 'e.g. ASTM D2435, ASTM D4186, ISO 17892-5.',
-  }),
-  field({
+  },
+  {
     key: 'compressionIndex',
     label: 'Cc',
     scope: 'shared',
@@ -335,8 +334,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['cc', 'compression index'],
     guide: 'Compression index (0.01–10).',
-  }),
-  field({
+  },
+  {
     key: 'recompressionIndex',
     label: 'Cr',
     scope: 'shared',
@@ -345,8 +344,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['cr', 'cs', 'recompression index', 'swelling index'],
     guide: 'Recompression index, less than Cc.',
-  }),
-  field({
+  },
+  {
     key: 'preconsolidationStress',
     label: "σ'p",
     scope: 'shared',
@@ -364,8 +363,8 @@ export const IMPORT_FIELDS = [
       'yield stress',
     ],
     guide: 'Preconsolidation pressure.',
-  }),
-  field({
+  },
+  {
     key: 'verticalEffectiveStress',
     label: "σ'v0",
     scope: 'shared',
@@ -385,8 +384,8 @@ export const IMPORT_FIELDS = [
       'vertical effective stress',
     ],
     guide: 'In-situ vertical effective stress.',
-  }),
-  field({
+  },
+  {
     key: 'overconsolidationRatio',
     label: 'OCR',
     scope: 'shared',
@@ -395,8 +394,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['ocr', 'overconsolidation ratio'],
     guide: "σ'p/σ'v0; worked out when both are given.",
-  }),
-  field({
+  },
+  {
     key: 'cvNc',
     label: 'cv (NC range)',
     scope: 'shared',
@@ -405,8 +404,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['cv nc', 'cv normally consolidated', 'cv virgin', 'cv'],
     guide: 'Coefficient of consolidation over the normally consolidated range.',
-  }),
-  field({
+  },
+  {
     key: 'cvOc',
     label: 'cv (OC range)',
     scope: 'shared',
@@ -415,8 +414,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['cv oc', 'cv overconsolidated', 'cv recompression'],
     guide: 'Over the overconsolidated (recompression) range.',
-  }),
-  field({
+  },
+  {
     key: 'secondaryCompressionIndex',
     label: 'Cα',
     scope: 'shared',
@@ -425,8 +424,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['calpha', 'c alpha', 'cα', 'ca', 'secondary compression', 'secondary compression index', 'cons_insc'],
     guide: 'Secondary compression index (Δe per log cycle).',
-  }),
-  field({
+  },
+  {
     key: 'mv',
     label: 'mv',
     scope: 'shared',
@@ -435,8 +434,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['mv', 'coefficient of volume compressibility', 'cons_inmv'],
     guide: 'Coefficient of volume compressibility at the design stress.',
-  }),
-  field({
+  },
+  {
     key: 'permeability',
     label: 'k',
     scope: 'shared',
@@ -445,8 +444,8 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['k', 'permeability', 'hydraulic conductivity'],
     guide: 'Coefficient of permeability.',
-  }),
-  field({
+  },
+  {
     key: 'deltaEOverE0',
     label: 'Δe/e0',
     scope: 'shared',
@@ -455,9 +454,30 @@ export const IMPORT_FIELDS = [
     required: false,
     synonyms: ['delta e/e0', 'de/e0', 'δe/e0', 'sample quality'],
     guide: 'Sample quality measure at the in-situ stress (Lunne et al. 1997).',
-  }),
-] as const;
+  },
+] as const satisfies readonly ImportFieldSpec[];
 
-export type ImportFieldKey = (typeof IMPORT_FIELDS)[number]['key'];
+type FieldRow = (typeof IMPORT_FIELDS)[number];
+export type ImportFieldKey = FieldRow['key'];
+export interface ImportField extends ImportFieldSpec {
+  key: ImportFieldKey;
+}
+/** Fields that stay in the firm's private tables and never enter the shared record. */
+export type PrivateFieldKey = Extract<FieldRow, { scope: 'private' }>['key'];
+export type SharedFieldKey = Extract<FieldRow, { scope: 'shared' }>['key'];
+export type RequiredFieldKey = Extract<FieldRow, { required: true }>['key'];
+export type TextFieldKey = Extract<FieldRow, { type: 'text' }>['key'];
+export type NumberFieldKey = Exclude<ImportFieldKey, TextFieldKey>;
 
 export const FIELD_BY_KEY: ReadonlyMap<string, ImportField> = new Map(IMPORT_FIELDS.map((f) => [f.key, f]));
+
+export function isImportFieldKey(value: unknown): value is ImportFieldKey {
+  return typeof value === 'string' && FIELD_BY_KEY.has(value);
+}
+
+/** The keys of the fields with this scope, in table order. */
+export function fieldKeysWithScope<S extends FieldScope>(scope: S): (S extends 'private' ? PrivateFieldKey : SharedFieldKey)[] {
+  return IMPORT_FIELDS.filter((f) => f.scope === scope).map((f) => f.key) as (S extends 'private'
+    ? PrivateFieldKey
+    : SharedFieldKey)[];
+}

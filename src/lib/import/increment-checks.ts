@@ -1,7 +1,5 @@
-import type { TestRecordIncrement, TestRecordInput } from '../schemas/test-record-row';
 import { formatValue as f } from './row-ranges';
-
-type IncrementInput = NonNullable<TestRecordInput['increments']>[number];
+import type { IncrementInput, TestRecordIncrement } from './test-record';
 
 interface Limit {
   key: keyof IncrementInput;
@@ -28,7 +26,7 @@ const LIMITS: readonly Limit[] = [
  */
 export function checkIncrements(
   list: readonly IncrementInput[],
-  add: (field: string | null, message: string) => void,
+  add: (field: 'increments', message: string) => void,
 ): TestRecordIncrement[] {
   const out: TestRecordIncrement[] = [];
   const seen = new Set<number>();

@@ -19,7 +19,16 @@ export {
   type ImportResult,
   type RowError,
 } from './errors';
-export { FIELD_BY_KEY, IMPORT_FIELDS, type ImportField, type ImportFieldKey } from './fields';
+export {
+  FIELD_BY_KEY,
+  fieldKeysWithScope,
+  IMPORT_FIELDS,
+  type ImportField,
+  type ImportFieldKey,
+  isImportFieldKey,
+  type PrivateFieldKey,
+  type SharedFieldKey,
+} from './fields';
 export { rememberKey } from './header-text';
 export { MAX_FILE_BYTES, MAX_ROWS } from './limits';
 export { LOCATION_CELL_PATTERN, locationCellFromCoordinates } from './location-cell';
@@ -32,6 +41,8 @@ export { FIRST_DATA_ROW_NUMBER, HEADER_ROW_NUMBER } from './row-numbers';
 export { SAMPLE_QUALITY_LABELS, type SampleQualityClass, sampleQualityClass } from './sample-quality';
 export { type ColumnGuideEntry, columnGuide, templateCsv } from './template';
 export { canonicalTestMethod, TEST_METHODS, type TestMethod } from './test-method';
+export type { DerivedValue, TestRecordIncrement, TestRecordInput, TestRecordRow, TestRecordVocabulary } from './test-record';
+export { testRecordRowSchema } from './test-record-row';
 export { siUnit, toSi, UNIT_CHOICES, type UnitChoice } from './units';
 export { canonicalUscs, USCS_SYMBOLS, type UscsSymbol } from './uscs';
 export { type ValidationContext, type ValidationResult, type ValidRow, validateRows } from './validate-rows';

@@ -53,10 +53,10 @@ export function mapRows(
         'BAD_MAPPING',
         `${capitalise(columnName(column))} is mapped to "${key}", which is not a field Claybank imports.`,
       );
-    if (sources.has(field.key as ImportFieldKey)) {
+    if (sources.has(field.key)) {
       return failure('BAD_MAPPING', `${field.label} is chosen for two columns; choose it for one column only.`);
     }
-    sources.set(field.key as ImportFieldKey, { field, column, unit: null });
+    sources.set(field.key, { field, column, unit: null });
   }
   for (const key of [...Object.keys(units), ...Object.keys(options.defaults ?? {})]) {
     if (!FIELD_BY_KEY.has(key)) return failure('BAD_MAPPING', `"${key}" is not a field Claybank imports.`);
@@ -71,7 +71,7 @@ export function mapRows(
   for (const key of [...Object.keys(options.defaults ?? {}), ...editedFields(edits)]) {
     const field = FIELD_BY_KEY.get(key);
     if (!field) return failure('BAD_MAPPING', `An edit names "${key}", which is not a field Claybank imports.`);
-    if (!sources.has(key as ImportFieldKey)) sources.set(key as ImportFieldKey, { field, column: null, unit: null });
+    if (!sources.has(field.key)) sources.set(field.key, { field, column: null, unit: null });
   }
   for (const [key, source] of sources) source.unit = units[key] ?? null;
 

@@ -1,16 +1,20 @@
-import type { TestRecordInput } from '../schemas/test-record-row';
+import type { ImportFieldKey, NumberFieldKey, TextFieldKey } from './fields';
+import type { TestRecordInput } from './test-record';
+
+/** Where a row problem sits: a field, the increments, or (null) the whole row. */
+export type RowIssueField = ImportFieldKey | 'increments';
 
 /** One row's values as the checks read them, and where they report problems. */
 export interface RowInput {
   /** the value if it is a number, else null */
-  num(key: string): number | null;
+  num(key: NumberFieldKey): number | null;
   /** the value if it is text, else null */
-  text(key: string): string | null;
-  add(field: string | null, message: string): void;
+  text(key: TextFieldKey): string | null;
+  add(field: RowIssueField | null, message: string): void;
 }
 
 export interface RowIssue {
-  field: string | null;
+  field: RowIssueField | null;
   message: string;
 }
 

@@ -1,4 +1,5 @@
 import { fieldName, fieldUnitLabel } from './field-labels';
+import type { NumberFieldKey } from './fields';
 import type { RowInput } from './row-input';
 import {
   formatValue as f,
@@ -15,12 +16,25 @@ import {
 } from './row-ranges';
 
 /** A number that passed its range check, else null. */
-export type Checked = (key: string) => number | null;
+export type Checked = (key: NumberFieldKey) => number | null;
+
+/**
+ * Every number against its range, then the relations between them (depths, Atterberg limits, Cr < Cc,
+ * stresses); gives the values that passed, PI and OCR (read or worked out).
+ */
+export function checkPhysicalValues(row: RowInput, organic: boolean) {
+  const ok = checkRanges(row, organic);
+  checkDepths(row, ok);
+  const plasticity = checkAtterbergLimits(row, ok);
+  checkCompressionIndices(row, ok);
+  const stresses = checkStresses(row, ok);
+  return { ok, plasticity, stresses };
+}
 
 /** Checks every number against its physical range (Gs may go lower for organic soils); returns the values that passed. */
 export function checkRanges(row: RowInput, organic: boolean): Checked {
-  const passed = new Set<string>();
-  for (const [key, base] of Object.entries(VALUE_RANGES)) {
+  const passed = new Set<NumberFieldKey>();
+  for (const [key, base] of Object.entries(VALUE_RANGES) as [NumberFieldKey, ValueRange][]) {
     const value = row.num(key);
     if (value === null) continue;
     const range: ValueRange = key === 'specificGravity' && organic ? { ...base, min: GS_MIN_ORGANIC } : base;

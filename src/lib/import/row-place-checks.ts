@@ -33,7 +33,12 @@ export function checkLocationCell(row: RowInput): { value: string | null; derive
 }
 
 /** The vocabulary entry a region or geological unit names, or null with a message suggesting the nearest. */
-export function checkVocabulary(row: RowInput, key: string, plural: string, index: VocabularyIndex): VocabularyEntry | null {
+export function checkVocabulary(
+  row: RowInput,
+  key: 'region' | 'geologicalUnit',
+  plural: string,
+  index: VocabularyIndex,
+): VocabularyEntry | null {
   const written = row.text(key);
   if (written === null) return null;
   const entry = index.find(written);

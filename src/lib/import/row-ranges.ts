@@ -1,3 +1,5 @@
+import type { NumberFieldKey } from './fields';
+
 /**
  * The physical ranges a value must fall in, in the bank's SI units. A value outside is almost always a
  * unit mistake or a wrong column, so the message says how to check. Ranges marked common practice are
@@ -18,7 +20,7 @@ export interface ValueRange {
 const DEPTH_HINT = ' If the column is in feet, choose ft as its unit.';
 const STRESS_HINT = ' If the column is in psf or tsf, choose that unit.';
 
-export const VALUE_RANGES: Readonly<Record<string, ValueRange>> = {
+export const VALUE_RANGES: Readonly<Partial<Record<NumberFieldKey, ValueRange>>> = {
   // common practice: oedometer samples come from the top few hundred metres
   depthTop: { min: 0, max: 300, highHint: DEPTH_HINT },
   depthBottom: { min: 0, minExclusive: true, max: 300, highHint: DEPTH_HINT },

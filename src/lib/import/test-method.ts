@@ -1,4 +1,4 @@
-/** How the oedometer test loaded the specimen, as the bank stores it. */
+/** How the oedometer test loaded the specimen, as the bank stores it (the bank tables use this list too). */
 export const TEST_METHODS = ['incremental', 'crs'] as const;
 export type TestMethod = (typeof TEST_METHODS)[number];
 

@@ -1,4 +1,4 @@
-/** ASTM D2487 group symbols, dual symbols included; peat is written "Pt". The same list as the database. */
+/** ASTM D2487 group symbols, dual symbols included; peat is written "Pt". The bank tables use this list too. */
 // biome-ignore format: coarse, dual-symbol coarse and fine groups on their own lines
 export const USCS_SYMBOLS = [
   'GW', 'GP', 'GM', 'GC', 'GC-GM', 'GW-GM', 'GW-GC', 'GP-GM', 'GP-GC',

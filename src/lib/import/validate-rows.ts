@@ -1,13 +1,9 @@
-import {
-  type TestRecordIncrement,
-  type TestRecordRow,
-  type TestRecordVocabulary,
-  testRecordRowSchema,
-} from '../schemas/test-record-row';
 import type { RowError } from './errors';
 import type { RawRow } from './raw-row';
 import { duplicateKey } from './row-key';
 import { FIRST_DATA_ROW_NUMBER } from './row-numbers';
+import type { TestRecordIncrement, TestRecordRow, TestRecordVocabulary } from './test-record';
+import { testRecordRowSchema } from './test-record-row';
 
 /** A row that passed every check: the record in SI units with derived values, and its increments. */
 export interface ValidRow {

@@ -30,6 +30,11 @@ describe('the lint rules keep the layers apart', () => {
     ['src/lib/consolidation/probe.ts', "import { useState } from 'react';\nexport const a = useState;\n"],
     ['src/lib/consolidation/probe.ts', "import { config } from '../server/config';\nexport const a = config;\n"],
     ['src/lib/schemas/probe.ts', "import { APP_URL } from 'astro:env/server';\nexport const a = APP_URL;\n"],
+    ['src/lib/import/probe.ts', "import { z } from '../schemas/vocabulary';\nexport const a = z;\n"],
+    ['src/lib/import/probe.ts', "import { z } from '../schemas';\nexport const a = z;\n"],
+    ['src/lib/import/probe.ts', "import { Kysely } from 'kysely';\nexport const a = Kysely;\n"],
+    ['src/lib/import/probe.ts', "import { readFileSync } from 'node:fs';\nexport const a = readFileSync;\n"],
+    ['src/lib/import/probe.ts', "import { config } from '../server/config';\nexport const a = config;\n"],
     ['src/components/dev/probe.tsx', "import { db } from '../../lib/server/app-context';\nexport const a = db;\n"],
     ['src/components/dev/probe.tsx', "import pg from 'pg';\nexport const a = pg;\n"],
     ['fakes/mail/probe.ts', "import { config } from '../../src/lib/server/config';\nexport const a = config;\n"],
@@ -40,6 +45,8 @@ describe('the lint rules keep the layers apart', () => {
 
   it.each([
     ['src/lib/consolidation/probe.ts', "import { z } from 'zod';\nexport const a = z;\n"],
+    ['src/lib/import/probe.ts', "import { z } from 'zod';\nexport const a = z;\n"],
+    ['src/lib/schemas/probe.ts', "import { IMPORT_FIELDS } from '../import/fields';\nexport const a = IMPORT_FIELDS;\n"],
     ['src/components/dev/probe.tsx', "import { useState } from 'react';\nexport const a = useState;\n"],
     ['src/lib/server/probe.ts', "import pg from 'pg';\nexport const a = pg;\n"],
   ])('allows in %s: %s', (path, source) => {

@@ -5,7 +5,7 @@ import { DEMO_FIRMS } from '../../../scripts/demo/people';
 import { DEMO_REGIONS, DEMO_UNITS } from '../../../scripts/demo/vocabulary';
 import { IMPORT_FIELDS } from '../../../src/lib/import/fields';
 import { sampleQualityClass } from '../../../src/lib/import/sample-quality';
-import { testRecordRowSchema } from '../../../src/lib/schemas/test-record-row';
+import { testRecordRowSchema } from '../../../src/lib/import/test-record-row';
 
 const records = generateDemoRecords();
 const clean = records.filter((r) => r.plantedOutlier === null);

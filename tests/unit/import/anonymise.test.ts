@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { sharedView, splitRow } from '../../../src/lib/import/anonymise';
+import { IMPORT_FIELDS, type ImportFieldSpec } from '../../../src/lib/import/fields';
 import { identifyingReasons } from '../../../src/lib/import/identifying-text';
 import { locationCellFromCoordinates } from '../../../src/lib/import/location-cell';
 import type { ValidRow } from '../../../src/lib/import/validate-rows';
@@ -38,18 +39,7 @@ function valid(values: Record<string, unknown>): ValidRow {
   return first;
 }
 
-const PRIVATE_KEYS = [
-  'projectName',
-  'clientName',
-  'boreholeId',
-  'sampleId',
-  'easting',
-  'northing',
-  'latitude',
-  'longitude',
-  'coordinateSystem',
-  'notes',
-];
+const PRIVATE_KEYS = IMPORT_FIELDS.filter((f) => f.scope === 'private').map((f) => f.key);
 
 describe('splitting a row into what stays private and what is shared', () => {
   it('keeps ids, coordinates and notes private and shares a 5 km cell', () => {
@@ -125,5 +115,50 @@ describe('splitting a row into what stays private and what is shared', () => {
       label: 'Sample quality',
       value: 'class 1, very good to excellent (worked out)',
     });
+  });
+});
+
+describe('the field table alone decides what is private', () => {
+  const siteAddress = (scope: ImportFieldSpec['scope']): ImportFieldSpec => ({
+    key: 'siteAddress',
+    label: 'Site address',
+    scope,
+    type: 'text',
+    unitKind: 'none',
+    required: false,
+    synonyms: ['site address'],
+    guide: 'Invented for this test.',
+  });
+  const withAddress = (row: ValidRow): ValidRow => ({
+    ...row,
+    record: { ...row.record, siteAddress: '12 Quay Street, Saltreach' } as ValidRow['record'],
+  });
+
+  it('keeps a field added to the table as private out of the shared part and in the private part', () => {
+    const { shared, private: own } = splitRow(withAddress(valid({})), [...IMPORT_FIELDS, siteAddress('private')]);
+    expect(shared).not.toHaveProperty('siteAddress');
+    expect(JSON.stringify(shared)).not.toContain('Quay Street');
+    expect(own).toHaveProperty('siteAddress', '12 Quay Street, Saltreach');
+  });
+
+  it('shares the same field when the table marks it shared (the table, not a list in the splitter, decides)', () => {
+    const { shared, private: own } = splitRow(withAddress(valid({})), [...IMPORT_FIELDS, siteAddress('shared')]);
+    expect(shared).toHaveProperty('siteAddress', '12 Quay Street, Saltreach');
+    expect(own).not.toHaveProperty('siteAddress');
+  });
+
+  it('shares nothing the table does not list, such as a value on the record that no field names', () => {
+    const { shared, private: own } = splitRow(withAddress(valid({})));
+    expect(shared).not.toHaveProperty('siteAddress');
+    expect(own).not.toHaveProperty('siteAddress');
+    expect(shared).not.toHaveProperty('derived');
+  });
+
+  it('puts every field of the real table in exactly the part its scope names', () => {
+    const { shared, private: own } = splitRow(valid({ samplingMethod: 'piston' }));
+    for (const field of IMPORT_FIELDS) {
+      expect(Object.hasOwn(own, field.key), field.key).toBe(field.scope === 'private');
+      expect(Object.hasOwn(shared, field.key), field.key).toBe(field.scope === 'shared');
+    }
   });
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { IMPORT_FIELDS } from '../../../src/lib/import/fields';
-import { testRecordRowSchema } from '../../../src/lib/schemas/test-record-row';
+import { testRecordRowSchema } from '../../../src/lib/import/test-record-row';
 import { VOCABULARY } from '../../fixtures/import/pipeline';
 
 const schema = testRecordRowSchema(VOCABULARY);

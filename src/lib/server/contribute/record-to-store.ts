@@ -1,3 +1,4 @@
+import { FIELD_BY_KEY, fieldKeysWithScope, type PrivateFieldKey, type PrivatePart } from '../../import';
 import type { ImportFlag, TestRecordPrivateTable, TestRecordTable } from '../db/bank-tables';
 
 /** The shared (anonymised) values of one record, in the bank's columns and units. */
@@ -34,20 +35,25 @@ export type SharedValues = Pick<
   | 'sample_quality_class'
 >;
 
+/**
+ * The private table's column for each field the import table marks private. Keyed by that table's
+ * private keys, so a new private field does not compile until it is given a private column.
+ */
+const PRIVATE_COLUMN_OF = {
+  projectName: 'project_name',
+  clientName: 'client_name',
+  boreholeId: 'borehole_id',
+  sampleId: 'sample_id',
+  easting: 'easting_m',
+  northing: 'northing_m',
+  latitude: 'latitude_deg',
+  longitude: 'longitude_deg',
+  coordinateSystem: 'coordinate_system',
+  notes: 'notes',
+} as const satisfies { readonly [K in PrivateFieldKey]: keyof TestRecordPrivateTable };
+
 /** The firm-private values of one record. */
-export type PrivateValues = Pick<
-  TestRecordPrivateTable,
-  | 'project_name'
-  | 'client_name'
-  | 'borehole_id'
-  | 'sample_id'
-  | 'easting_m'
-  | 'northing_m'
-  | 'latitude_deg'
-  | 'longitude_deg'
-  | 'coordinate_system'
-  | 'notes'
->;
+export type PrivateValues = Pick<TestRecordPrivateTable, (typeof PRIVATE_COLUMN_OF)[PrivateFieldKey]>;
 
 /** One load increment of the raw oedometer readings. */
 export interface IncrementToStore {
@@ -101,18 +107,18 @@ export const SHARED_COLUMNS: readonly { name: keyof SharedValues; type: string }
   { name: 'sample_quality_class', type: 'integer' },
 ];
 
-export const PRIVATE_COLUMNS: readonly { name: keyof PrivateValues; type: string }[] = [
-  { name: 'project_name', type: 'text' },
-  { name: 'client_name', type: 'text' },
-  { name: 'borehole_id', type: 'text' },
-  { name: 'sample_id', type: 'text' },
-  { name: 'easting_m', type: 'numeric' },
-  { name: 'northing_m', type: 'numeric' },
-  { name: 'latitude_deg', type: 'numeric' },
-  { name: 'longitude_deg', type: 'numeric' },
-  { name: 'coordinate_system', type: 'text' },
-  { name: 'notes', type: 'text' },
-];
+const PRIVATE_KEYS = fieldKeysWithScope('private');
+const SQL_TYPE = { text: 'text', number: 'numeric', integer: 'integer' } as const;
+
+export const PRIVATE_COLUMNS: readonly { name: keyof PrivateValues; type: string }[] = PRIVATE_KEYS.map((key) => ({
+  name: PRIVATE_COLUMN_OF[key],
+  type: SQL_TYPE[FIELD_BY_KEY.get(key)?.type ?? 'text'],
+}));
+
+/** The private part of a split row, in the private table's columns. */
+export function toPrivateValues(part: PrivatePart): PrivateValues {
+  return Object.fromEntries(PRIVATE_KEYS.map((key) => [PRIVATE_COLUMN_OF[key], part[key]])) as PrivateValues;
+}
 
 /** The key that finds the same test in two uploads: borehole, sample and depths. */
 export function duplicateKey(

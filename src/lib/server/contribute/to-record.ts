@@ -1,5 +1,5 @@
 import { splitRow, type ValidRow } from '../../import';
-import type { IncrementToStore, RecordToStore } from './record-to-store';
+import { type IncrementToStore, type RecordToStore, toPrivateValues } from './record-to-store';
 
 /** A validated, anonymised row in the bank's columns. Unloading steps are those below an earlier stress. */
 export function toRecordToStore(valid: ValidRow): RecordToStore {
@@ -51,18 +51,7 @@ export function toRecordToStore(valid: ValidRow): RecordToStore {
       delta_e_over_e0: shared.deltaEOverE0,
       sample_quality_class: shared.sampleQualityClass,
     },
-    private: {
-      project_name: own.projectName,
-      client_name: own.clientName,
-      borehole_id: own.boreholeId,
-      sample_id: own.sampleId,
-      easting_m: own.easting,
-      northing_m: own.northing,
-      latitude_deg: own.latitude,
-      longitude_deg: own.longitude,
-      coordinate_system: own.coordinateSystem,
-      notes: own.notes,
-    },
+    private: toPrivateValues(own),
     increments,
     flags,
   };

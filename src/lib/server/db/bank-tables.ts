@@ -1,4 +1,7 @@
 import type { ColumnType, Generated, GeneratedAlways, Insertable, Selectable, Updateable } from 'kysely';
+import type { SampleQualityClass } from '../../import/sample-quality';
+import { TEST_METHODS, type TestMethod } from '../../import/test-method';
+import { USCS_SYMBOLS, type UscsSymbol } from '../../import/uscs';
 import { GENESIS_VALUES } from '../../schemas/vocabulary';
 import type { Timestamp } from './schema';
 
@@ -8,14 +11,8 @@ import type { Timestamp } from './schema';
 export const GENESES = GENESIS_VALUES;
 export type Genesis = (typeof GENESES)[number];
 
-/** ASTM D2487 group symbols, dual symbols included; peat is 'Pt'. */
-// biome-ignore format: coarse, dual-symbol coarse and fine groups on their own lines
-export const USCS_SYMBOLS = [
-  'GW', 'GP', 'GM', 'GC', 'GC-GM', 'GW-GM', 'GW-GC', 'GP-GM', 'GP-GC',
-  'SW', 'SP', 'SM', 'SC', 'SC-SM', 'SW-SM', 'SW-SC', 'SP-SM', 'SP-SC',
-  'CL', 'ML', 'OL', 'CH', 'MH', 'OH', 'CL-ML', 'Pt',
-] as const;
-export type UscsSymbol = (typeof USCS_SYMBOLS)[number];
+/** ASTM D2487 group symbols, loading methods and sample quality classes: the import core's closed lists. */
+export { type SampleQualityClass, TEST_METHODS, type TestMethod, USCS_SYMBOLS, type UscsSymbol };
 
 export const SUBMISSION_STATUSES = ['draft', 'submitted', 'in_review', 'accepted', 'returned', 'rejected', 'withdrawn'] as const;
 export type SubmissionStatus = (typeof SUBMISSION_STATUSES)[number];
@@ -26,13 +23,10 @@ export const TEST_RECORD_STATUSES = ['pending', 'returned', 'published', 'reject
 export type TestRecordStatus = (typeof TEST_RECORD_STATUSES)[number];
 export const RECORD_KINDS = ['oedometer', 'field_back_analysis'] as const;
 export type RecordKind = (typeof RECORD_KINDS)[number];
-export const TEST_METHODS = ['incremental', 'crs'] as const;
-export type TestMethod = (typeof TEST_METHODS)[number];
 export const STRESS_RANGES = ['NC', 'OC'] as const;
 export type StressRange = (typeof STRESS_RANGES)[number];
 export const CV_METHODS = ['root_time', 'log_time', 'crs', 'other'] as const;
 export type CvMethod = (typeof CV_METHODS)[number];
-export type SampleQualityClass = 1 | 2 | 3 | 4;
 export type UnitSystem = 'SI' | 'US';
 export type SearchOperation = 'upsert' | 'delete';
 
