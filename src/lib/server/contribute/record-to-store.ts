@@ -113,15 +113,3 @@ export const PRIVATE_COLUMNS: readonly { name: keyof PrivateValues; type: string
   { name: 'coordinate_system', type: 'text' },
   { name: 'notes', type: 'text' },
 ];
-
-/** The key that finds the same test in two uploads: borehole, sample and depths. */
-export function duplicateKey(
-  boreholeId: string | null,
-  sampleId: string | null,
-  depthTopM: number,
-  depthBottomM: number,
-): string {
-  return [boreholeId ?? '', sampleId ?? '', depthTopM.toFixed(3), depthBottomM.toFixed(3)]
-    .map((part) => part.toLowerCase())
-    .join('|');
-}
