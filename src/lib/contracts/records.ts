@@ -92,3 +92,11 @@ export interface RecordDetail {
   record: SharedRecord & { mine: boolean; stressLevels: StressLevel[] };
   private?: PrivateRecord | null;
 }
+
+/**
+ * A record's value by its API name (`compressionIndex`, `cvNcM2PerYear`), for tables that list their
+ * columns by name; undefined when the record has no such value.
+ */
+export function recordValue(record: Partial<SharedRecord & PrivateRecord>, name: string): unknown {
+  return Object.hasOwn(record, name) ? (record as Record<string, unknown>)[name] : undefined;
+}

@@ -12,7 +12,7 @@ export interface QueueEntry extends SubmissionSummary {
 }
 
 /** `GET /api/review` */
-export interface ReviewQueue {
+export interface ReviewQueueList {
   totals: { submissions: number; records: number };
   submissions: QueueEntry[];
 }

@@ -65,6 +65,11 @@ export interface StoredSubmission {
   flaggedRows: number;
 }
 
+/** The 201 answer of an upload. */
+export interface SubmittedUpload {
+  submission: StoredSubmission;
+}
+
 export interface CheckColumns {
   headers: string[];
   mapping: (string | null)[];
