@@ -243,18 +243,17 @@ async function ours(
 ): Promise<{ total: number; prepare: number; store: number }> {
   const bytes = new TextEncoder().encode(csv);
   const started = performance.now();
-  const prepared = await prepareUpload(app.db, ids.firmId, bytes, { format: 'csv' });
+  const prepared = await prepareUpload(app, ids.firmId, bytes, { format: 'csv' });
   if (!prepared.ok || prepared.errors.length)
     throw new Error(
       `the benchmark file did not pass: ${JSON.stringify(prepared.ok ? prepared.errors.slice(0, 3) : prepared.error)}`,
     );
   const prepare = performance.now() - started;
   await storeSubmission(
-    app.db,
+    { db: app.db, appUrl: 'http://127.0.0.1:4321' },
     { userId: ids.userId, firmId: ids.firmId, ipAddress: null, via: 'seed' },
     { kind: 'csv', name: 'bench.csv', mediaType: 'text/csv', bytes, sha256: createHash('sha256').update(bytes).digest('hex') },
     prepared.records,
-    'http://127.0.0.1:4321',
   );
   const total = performance.now() - started;
   return { total, prepare, store: total - prepare };

@@ -2,6 +2,8 @@
 
 declare namespace App {
   interface Locals {
+    /** The process-wide services (database, auth, mail, app address), handed to every endpoint. */
+    app: import('./lib/server/app-services').AppServices;
     /** SI or US customary, from the person's preference (a cookie until accounts carry it). */
     unitSystem: import('./lib/preferences/unit-system').UnitSystem;
     /** The signed-in person, their permissions context and firms; null when signed out. */

@@ -1,6 +1,6 @@
 import { defineMiddleware, sequence } from 'astro:middleware';
 import { UNIT_SYSTEM_COOKIE, unitSystemFromCookie } from './lib/preferences/unit-system';
-import { appContext } from './lib/server/app-context';
+import { appServices } from './lib/server/app-context';
 import { CLIENT_IP_HEADER } from './lib/server/auth/create-auth';
 import { resolveIdentity } from './lib/server/auth/resolve-actor';
 import { config } from './lib/server/config';
@@ -52,10 +52,13 @@ const sameOriginWrites = defineMiddleware((context, next) => {
 const SKIP_SESSION = new Set(['/api/health']);
 
 /**
- * Resolves per-request facts into locals: unit system, and the signed-in person with their active
- * firm and roles. It never decides who may see what; endpoints and pages check permissions.
+ * Resolves per-request facts into locals: the app's services, the unit system, and the signed-in
+ * person with their active firm and roles. It never decides who may see what; endpoints and pages
+ * check permissions.
  */
 const resolveLocals = defineMiddleware(async (context, next) => {
+  const app = appServices();
+  context.locals.app = app;
   context.request.headers.set(CLIENT_IP_HEADER, context.clientAddress);
   context.locals.unitSystem = unitSystemFromCookie(context.cookies.get(UNIT_SYSTEM_COOKIE)?.value);
   context.locals.identity = null;
@@ -64,10 +67,12 @@ const resolveLocals = defineMiddleware(async (context, next) => {
 
   let refreshCookies: string[] = [];
   try {
-    const { auth, database } = appContext();
-    const { headers, response: session } = await auth.api.getSession({ headers: context.request.headers, returnHeaders: true });
+    const { headers, response: session } = await app.auth.api.getSession({
+      headers: context.request.headers,
+      returnHeaders: true,
+    });
     refreshCookies = headers.getSetCookie();
-    if (session) context.locals.identity = await resolveIdentity(database.db, session);
+    if (session) context.locals.identity = await resolveIdentity(app.db, session);
   } catch (error) {
     console.error(
       '[session] could not resolve the session; treating the request as signed out:',

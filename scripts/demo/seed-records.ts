@@ -2,7 +2,7 @@ import { createHash } from 'node:crypto';
 import { duplicateKey } from '../../src/lib/import';
 import type { AppContext } from '../../src/lib/server/build-context';
 import { submitUpload } from '../../src/lib/server/contribute/submit-upload';
-import { bulkInsert } from '../../src/lib/server/db/bulk-insert';
+import { insertIncrements } from '../../src/lib/server/records/record-store-repository';
 import { decideSubmission } from '../../src/lib/server/review/review-decision';
 import { inTenantTransaction } from '../../src/lib/server/tenancy/tenant-transaction';
 import { type DemoRecord, generateDemoRecords } from './generate-records';
@@ -57,22 +57,19 @@ async function attachIncrements(ctx: AppContext, firmId: string, submissionId: s
           depthBottom: record.depthBottom ?? 0,
         }),
       );
-      return id
-        ? (record.increments ?? []).map((inc) => [id, inc.incrementNo, inc.appliedStressKpa, inc.isUnloading, inc.voidRatioEnd])
-        : [];
+      if (!id) return [];
+      return (record.increments ?? []).map((inc) => ({
+        recordId: id,
+        incrementNo: inc.incrementNo,
+        appliedStressKpa: inc.appliedStressKpa,
+        isUnloading: inc.isUnloading,
+        durationHours: null,
+        endDeformationMm: null,
+        endVoidRatio: inc.voidRatioEnd,
+        specimenHeightMm: null,
+      }));
     });
-    await bulkInsert(
-      trx,
-      'oedometer_increment',
-      [
-        { name: 'test_record_id', type: 'uuid' },
-        { name: 'increment_no', type: 'integer' },
-        { name: 'applied_stress_kpa', type: 'numeric' },
-        { name: 'is_unloading', type: 'boolean' },
-        { name: 'end_void_ratio', type: 'numeric' },
-      ],
-      rows,
-    );
+    await insertIncrements(trx, rows);
   });
 }
 
@@ -85,7 +82,13 @@ async function attachIncrements(ctx: AppContext, firmId: string, submissionId: s
 export async function seedRecords(ctx: AppContext): Promise<{ records: number; submissions: number }> {
   const db = ctx.database.db;
   const records = generateDemoRecords();
-  const steward = await db.selectFrom('user').select('id').where('email', '=', 'steward@example.test').executeTakeFirstOrThrow();
+  const services = { db, appUrl: APP_URL };
+  const stewardRow = await db
+    .selectFrom('user')
+    .select('id')
+    .where('email', '=', 'steward@example.test')
+    .executeTakeFirstOrThrow();
+  const steward = { userId: stewardRow.id, firmId: null, ipAddress: null };
   let submissions = 0;
   for (const firmSlug of ['quillfen', 'ellery-voss', 'northmarch']) {
     const firm = await db.selectFrom('organization').select('id').where('slug', '=', firmSlug).executeTakeFirstOrThrow();
@@ -105,11 +108,10 @@ export async function seedRecords(ctx: AppContext): Promise<{ records: number; s
         options: { format: 'csv' as const, remember: true },
       };
       const stored = await submitUpload(
-        db,
+        services,
         { userId: contributor.id, firmId: firm.id, ipAddress: null, via: 'seed' },
         upload,
         'csv',
-        APP_URL,
       );
       await attachIncrements(ctx, firm.id, stored.id, part);
       submissions++;
@@ -123,25 +125,19 @@ export async function seedRecords(ctx: AppContext): Promise<{ records: number; s
           .orderBy('row_number')
           .limit(2)
           .execute();
-        await decideSubmission(
-          db,
-          { userId: steward.id, ipAddress: null },
-          stored.id,
-          {
-            action: 'return',
-            comment: 'Two records need a second look before they enter the bank.',
-            recordComments: review.map((r, i) => ({
-              recordId: r.id,
-              comment:
-                i === 0
-                  ? "σ'p looks high for this depth; please check the units (kPa)."
-                  : 'Cr is close to Cc; please confirm the unload–reload branch.',
-            })),
-          },
-          APP_URL,
-        );
+        await decideSubmission(services, steward, stored.id, {
+          action: 'return',
+          comment: 'Two records need a second look before they enter the bank.',
+          recordComments: review.map((r, i) => ({
+            recordId: r.id,
+            comment:
+              i === 0
+                ? "σ'p looks high for this depth; please check the units (kPa)."
+                : 'Cr is close to Cc; please confirm the unload–reload branch.',
+          })),
+        });
       } else {
-        await decideSubmission(db, { userId: steward.id, ipAddress: null }, stored.id, { action: 'accept' }, APP_URL);
+        await decideSubmission(services, steward, stored.id, { action: 'accept' });
       }
     }
   }

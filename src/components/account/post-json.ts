@@ -1,27 +1,27 @@
-/** One problem with one field, as the API reports it (`path` is dotted, empty for the whole body). */
-export interface FieldIssue {
-  path: string;
-  message: string;
-}
+import type { ErrorBody, ErrorCode, FieldIssue } from '../../lib/contracts/errors';
 
+export type { FieldIssue } from '../../lib/contracts/errors';
+
+/** A refused request: the API's error body, or NETWORK when the server could not be reached. */
 export interface ApiFailure {
   status: number;
-  code: string;
+  code: ErrorCode | 'NETWORK' | 'UNKNOWN';
   message: string;
   issues: FieldIssue[];
 }
 
 export type ApiResult<T> = { ok: true; status: number; data: T } | { ok: false; failure: ApiFailure };
 
-const UNREACHABLE: ApiFailure = {
+export const UNREACHABLE: ApiFailure = {
   status: 0,
   code: 'NETWORK',
   message: 'Could not reach Claybank. Check your connection and try again.',
   issues: [],
 };
 
-function failureFrom(status: number, body: unknown): ApiFailure {
-  const error = (body as { error?: Partial<ApiFailure> } | null)?.error;
+/** The failure an answer describes; tolerant of bodies that are not in the error shape (a proxy's page). */
+export function failureFrom(status: number, body: unknown): ApiFailure {
+  const error = (body as Partial<ErrorBody> | null)?.error as Partial<ErrorBody['error']> | undefined;
   return {
     status,
     code: typeof error?.code === 'string' ? error.code : 'UNKNOWN',

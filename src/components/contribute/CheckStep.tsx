@@ -1,6 +1,6 @@
+import type { CheckResult } from '../../lib/contracts/submissions';
 import type { RowError } from '../../lib/import';
 import FormMessage from '../account/FormMessage';
-import type { CheckResult } from './api-types';
 import { plural } from './format';
 import ProblemTable from './ProblemTable';
 import StepPanel from './StepPanel';

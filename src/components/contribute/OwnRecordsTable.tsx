@@ -1,4 +1,6 @@
-import type { OwnRecord, Vocabulary } from './api-types';
+import { recordValue } from '../../lib/contracts/records';
+import type { OwnRecord } from '../../lib/contracts/submissions';
+import type { Vocabulary } from '../../lib/contracts/vocabulary';
 import { formatValue } from './format';
 import RecordEditor from './RecordEditor';
 import { columnHeading, depthRange, storedName, TABLE_FIELDS } from './record-fields';
@@ -95,7 +97,7 @@ export default function OwnRecordsTable(props: OwnRecordsTableProps) {
                 <td className="whitespace-nowrap text-right">{depthRange(record.depthTopM, record.depthBottomM, formatValue)}</td>
                 {TABLE_FIELDS.map((field) => (
                   <td key={field} className="text-right" data-field={field}>
-                    {formatValue(record[storedName(field)])}
+                    {formatValue(recordValue(record, storedName(field)))}
                   </td>
                 ))}
               </tr>

@@ -1,9 +1,10 @@
 import { type SyntheticEvent, useState } from 'react';
+import { type OwnRecord, recordCorrectionSchema } from '../../lib/contracts/submissions';
+import type { Vocabulary } from '../../lib/contracts/vocabulary';
 import { FIELD_BY_KEY } from '../../lib/import';
 import FormMessage from '../account/FormMessage';
-import { fieldErrorsFromServer } from '../account/field-errors';
+import { fieldErrorsFromServer, fieldErrorsFromZod } from '../account/field-errors';
 import { requestJson } from '../account/post-json';
-import type { OwnRecord, Vocabulary } from './api-types';
 import { fieldHeading, PRIVATE_FIELDS, SHARED_FIELDS } from './record-fields';
 import { changedValues, valueText } from './record-values';
 
@@ -41,8 +42,13 @@ export default function RecordEditor({ submissionId, record, vocabulary, onSaved
       setProblem('Nothing has changed yet. Correct the values the steward commented on.');
       return;
     }
+    const body = recordCorrectionSchema.safeParse({ values: parsed.values });
+    if (!body.success) {
+      setErrors(fieldErrorsFromZod(body.error.issues.map((issue) => ({ ...issue, path: issue.path.slice(1) }))));
+      return;
+    }
     setBusy(true);
-    const result = await requestJson('PATCH', `/api/submissions/${submissionId}/records/${record.id}`, { values: parsed.values });
+    const result = await requestJson('PATCH', `/api/submissions/${submissionId}/records/${record.id}`, body.data);
     setBusy(false);
     if (!result.ok) {
       const issues = result.failure.issues.map((i) => ({ ...i, path: i.path.replace(/^values\./, '') }));

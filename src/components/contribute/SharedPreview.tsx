@@ -1,5 +1,5 @@
+import type { CheckResult } from '../../lib/contracts/submissions';
 import { FIELD_BY_KEY } from '../../lib/import';
-import type { CheckResult } from './api-types';
 import { PRIVATE_FIELDS } from './record-fields';
 import StepPanel from './StepPanel';
 

@@ -1,4 +1,4 @@
-import type { StoredSubmission } from './api-types';
+import type { StoredSubmission } from '../../lib/contracts/submissions';
 import { plural } from './format';
 
 interface StoredNoticeProps {

@@ -1,7 +1,9 @@
 import { useCallback, useEffect, useState } from 'react';
+import type { Json } from '../../lib/contracts/json';
+import type { OwnSubmission } from '../../lib/contracts/submissions';
+import type { Vocabulary } from '../../lib/contracts/vocabulary';
 import FormMessage from '../account/FormMessage';
 import { getJson, postJson } from '../account/post-json';
-import type { OwnSubmission, Vocabulary } from './api-types';
 import { plural } from './format';
 import OwnRecordsTable from './OwnRecordsTable';
 import SubmissionActions from './SubmissionActions';
@@ -14,7 +16,7 @@ interface SubmissionDetailProps {
   canChange: boolean;
 }
 
-type DetailState = { kind: 'loading' } | { kind: 'failed'; message: string } | { kind: 'loaded'; data: OwnSubmission };
+type DetailState = { kind: 'loading' } | { kind: 'failed'; message: string } | { kind: 'loaded'; data: Json<OwnSubmission> };
 
 /** One of the firm's submissions: its state, the steward's comments, every record (correctable when returned), history. */
 export default function SubmissionDetail({ submissionId, canChange }: SubmissionDetailProps) {
@@ -25,7 +27,7 @@ export default function SubmissionDetail({ submissionId, canChange }: Submission
   const [message, setMessage] = useState<{ kind: 'error' | 'success'; text: string } | null>(null);
 
   const load = useCallback(async () => {
-    const result = await getJson<OwnSubmission>(`/api/submissions/${encodeURIComponent(submissionId)}`);
+    const result = await getJson<Json<OwnSubmission>>(`/api/submissions/${encodeURIComponent(submissionId)}`);
     setState(result.ok ? { kind: 'loaded', data: result.data } : { kind: 'failed', message: result.failure.message });
   }, [submissionId]);
 

@@ -1,4 +1,5 @@
-import type { HistoryEvent } from './api-types';
+import type { Json } from '../../lib/contracts/json';
+import type { HistoryEvent } from '../../lib/contracts/submissions';
 import { formatDateTime } from './format';
 import { statusLabel } from './status-labels';
 
@@ -9,7 +10,7 @@ function eventText(from: string | null, to: string): string {
 }
 
 /** Who moved the submission from which state to which, when, and what they wrote. */
-export default function SubmissionHistory({ history }: { history: HistoryEvent[] }) {
+export default function SubmissionHistory({ history }: { history: Json<HistoryEvent>[] }) {
   return (
     <section className="panel" aria-labelledby="history-heading" data-testid="submission-history">
       <h2 id="history-heading" className="border-b border-ink-200 px-4 py-2">

@@ -1,10 +1,11 @@
-import type { OwnRecord, OwnSubmission } from './api-types';
+import type { Json } from '../../lib/contracts/json';
+import type { OwnRecord, OwnSubmission } from '../../lib/contracts/submissions';
 import { formatDateTime } from './format';
 import StatusTag from './StatusTag';
 import { sourceKindLabel, statusLabel } from './status-labels';
 
 interface SubmissionSummaryPanelProps {
-  submission: OwnSubmission['submission'];
+  submission: Json<OwnSubmission>['submission'];
   records: OwnRecord[];
 }
 

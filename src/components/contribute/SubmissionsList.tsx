@@ -1,21 +1,25 @@
 import { useCallback, useEffect, useState } from 'react';
+import type { Json } from '../../lib/contracts/json';
+import type { SubmissionList, SubmissionSummary } from '../../lib/contracts/submissions';
 import FormMessage from '../account/FormMessage';
 import { getJson } from '../account/post-json';
 import { PANEL_TABLE_CLASS } from '../firm/panel-table';
-import type { SubmissionSummary } from './api-types';
 import { SUBMISSIONS_CHANGED } from './events';
 import { formatDateTime } from './format';
 import StatusTag from './StatusTag';
 import { sourceKindLabel } from './status-labels';
 
-type ListState = { kind: 'loading' } | { kind: 'failed'; message: string } | { kind: 'loaded'; submissions: SubmissionSummary[] };
+type ListState =
+  | { kind: 'loading' }
+  | { kind: 'failed'; message: string }
+  | { kind: 'loaded'; submissions: Json<SubmissionSummary>[] };
 
 /** The firm's submissions, newest first, with their review state and the steward's comment. */
 export default function SubmissionsList() {
   const [state, setState] = useState<ListState>({ kind: 'loading' });
 
   const load = useCallback(async () => {
-    const result = await getJson<{ submissions: SubmissionSummary[] }>('/api/submissions');
+    const result = await getJson<Json<SubmissionList>>('/api/submissions');
     setState(
       result.ok ? { kind: 'loaded', submissions: result.data.submissions } : { kind: 'failed', message: result.failure.message },
     );

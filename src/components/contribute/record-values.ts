@@ -1,10 +1,11 @@
+import { recordValue } from '../../lib/contracts/records';
+import type { OwnRecord } from '../../lib/contracts/submissions';
 import { FIELD_BY_KEY } from '../../lib/import';
-import type { OwnRecord } from './api-types';
 import { storedName } from './record-fields';
 
 /** A stored value as editable text (SI units, decimal point). */
 export function valueText(record: OwnRecord, field: string): string {
-  const value = record[storedName(field)];
+  const value = recordValue(record, storedName(field));
   return value === null || value === undefined ? '' : String(value);
 }
 

@@ -1,5 +1,5 @@
 import type { UploadOptions } from '../../lib/schemas/upload-options';
-import type { ApiFailure, ApiResult } from '../account/post-json';
+import { type ApiResult, failureFrom, UNREACHABLE } from '../account/post-json';
 
 /**
  * Sends the file and its options as multipart/form-data (what the upload endpoints read) and returns
@@ -18,15 +18,7 @@ export async function sendUpload<T>(url: string, file: File, options: Partial<Up
       headers: { accept: 'application/json' },
     });
   } catch {
-    return {
-      ok: false,
-      failure: {
-        status: 0,
-        code: 'NETWORK',
-        message: 'Could not reach Claybank. Check your connection and try again.',
-        issues: [],
-      },
-    };
+    return { ok: false, failure: UNREACHABLE };
   }
   let body: unknown = null;
   try {
@@ -35,15 +27,5 @@ export async function sendUpload<T>(url: string, file: File, options: Partial<Up
     body = null;
   }
   if (response.ok) return { ok: true, status: response.status, data: body as T };
-  const error = (body as { error?: Partial<ApiFailure> } | null)?.error;
-  return {
-    ok: false,
-    failure: {
-      status: response.status,
-      code: typeof error?.code === 'string' ? error.code : 'UNKNOWN',
-      message:
-        typeof error?.message === 'string' ? error.message : `The upload was refused (HTTP ${response.status}). Try again.`,
-      issues: Array.isArray(error?.issues) ? error.issues : [],
-    },
-  };
+  return { ok: false, failure: failureFrom(response.status, body) };
 }

@@ -1,7 +1,8 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
+import type { FieldMappingAnswer } from '../../lib/contracts/submissions';
+import type { Vocabulary } from '../../lib/contracts/vocabulary';
 import { autoMapColumns, type Delimiter, type RememberedMapping } from '../../lib/import';
 import { getJson } from '../account/post-json';
-import type { Vocabulary } from './api-types';
 import { type ColumnChoice, choicesFromAuto, chooseField, chooseUnit } from './column-choices';
 import { type FileRead, formatFromName, readChosenFile, type UploadFormat } from './read-file';
 
@@ -31,7 +32,7 @@ export function useFileChoice(onReset: () => void) {
   const readToken = useRef(0);
 
   useEffect(() => {
-    void getJson<{ mapping: RememberedMapping }>('/api/firm/field-mapping').then((r) => r.ok && setRemembered(r.data.mapping));
+    void getJson<FieldMappingAnswer>('/api/firm/field-mapping').then((r) => r.ok && setRemembered(r.data.mapping));
     void getJson<Vocabulary>('/api/vocabulary').then((r) => r.ok && setVocabulary(r.data));
   }, []);
 

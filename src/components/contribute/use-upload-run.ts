@@ -1,7 +1,7 @@
 import { useCallback, useState } from 'react';
+import type { CheckResult, StoredSubmission, SubmittedUpload } from '../../lib/contracts/submissions';
 import type { RowError } from '../../lib/import';
 import type { UploadOptions } from '../../lib/schemas/upload-options';
-import type { CheckResult, StoredSubmission } from './api-types';
 import { announceSubmissionsChanged } from './events';
 import { problemsFromIssues } from './problem-rows';
 import { sendUpload } from './send-upload';
@@ -48,7 +48,7 @@ export function useUploadRun() {
   async function submit(file: File, options: Partial<UploadOptions>) {
     setBusy('submitting');
     setSubmitFailure(null);
-    const result = await sendUpload<{ submission: StoredSubmission }>('/api/submissions', file, options);
+    const result = await sendUpload<SubmittedUpload>('/api/submissions', file, options);
     setBusy(null);
     if (result.ok) {
       setStored(result.data.submission);

@@ -1,15 +1,17 @@
 import { type SyntheticEvent, useCallback, useEffect, useState } from 'react';
+import type { ApiKeyList, CreatedApiKey, FirmApiKey } from '../../lib/contracts/firms';
+import type { Json } from '../../lib/contracts/json';
 import { createApiKeySchema } from '../../lib/schemas/firm';
 import FormMessage from '../account/FormMessage';
 import { getJson, postJson, requestJson } from '../account/post-json';
 import TextField from '../account/TextField';
 import { useSchemaForm } from '../account/use-schema-form';
 import ConfirmButton from './ConfirmButton';
-import { type FirmApiKey, formatDate } from './firm-types';
+import { formatDate } from './format-date';
 import NewKeySecret from './NewKeySecret';
 import { PANEL_TABLE_CLASS } from './panel-table';
 
-type KeysState = { kind: 'loading' } | { kind: 'failed'; message: string } | { kind: 'loaded'; keys: FirmApiKey[] };
+type KeysState = { kind: 'loading' } | { kind: 'failed'; message: string } | { kind: 'loaded'; keys: Json<FirmApiKey>[] };
 
 /** The firm's API keys for upload scripts: create (secret shown once), list, revoke. */
 export default function ApiKeysPanel() {
@@ -19,7 +21,7 @@ export default function ApiKeysPanel() {
   const form = useSchemaForm(createApiKeySchema, { name: '' });
 
   const load = useCallback(async () => {
-    const result = await getJson<{ keys: FirmApiKey[] }>('/api/firm/api-keys');
+    const result = await getJson<Json<ApiKeyList>>('/api/firm/api-keys');
     setState(result.ok ? { kind: 'loaded', keys: result.data.keys } : { kind: 'failed', message: result.failure.message });
   }, []);
 
@@ -29,11 +31,9 @@ export default function ApiKeysPanel() {
 
   async function onSubmit(event: SyntheticEvent) {
     setSecret(null);
-    const created = await form.submit(event, (input) =>
-      postJson<{ key: FirmApiKey; secret: string }>('/api/firm/api-keys', input),
-    );
+    const created = await form.submit(event, (input) => postJson<Json<CreatedApiKey>>('/api/firm/api-keys', input));
     if (!created) return;
-    setSecret({ name: created.key.name, value: created.secret });
+    setSecret({ name: created.key.name ?? form.values.name, value: created.secret });
     form.setValue('name', '');
     await load();
   }

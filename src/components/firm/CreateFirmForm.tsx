@@ -1,4 +1,5 @@
 import type { SyntheticEvent } from 'react';
+import type { CreatedFirm } from '../../lib/contracts/firms';
 import { createFirmSchema } from '../../lib/schemas/firm';
 import FormMessage from '../account/FormMessage';
 import { postJson } from '../account/post-json';
@@ -9,7 +10,7 @@ export default function CreateFirmForm() {
   const form = useSchemaForm(createFirmSchema, { name: '' });
 
   async function onSubmit(event: SyntheticEvent) {
-    const created = await form.submit(event, (input) => postJson<{ firm: { id: string } }>('/api/firms', input));
+    const created = await form.submit(event, (input) => postJson<CreatedFirm>('/api/firms', input));
     if (created) window.location.assign('/firm');
   }
 

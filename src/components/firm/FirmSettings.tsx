@@ -1,9 +1,10 @@
 import { useCallback, useEffect, useState } from 'react';
+import type { FirmOverview } from '../../lib/contracts/firms';
+import type { Json } from '../../lib/contracts/json';
 import type { FirmRole } from '../../lib/permissions/roles';
 import FormMessage from '../account/FormMessage';
 import { getJson } from '../account/post-json';
 import ApiKeysPanel from './ApiKeysPanel';
-import type { FirmOverview } from './firm-types';
 import InvitePanel from './InvitePanel';
 import LeaveFirmPanel from './LeaveFirmPanel';
 import MembersPanel from './MembersPanel';
@@ -16,14 +17,14 @@ interface FirmSettingsProps {
   canManageApiKeys: boolean;
 }
 
-type OverviewState = { kind: 'loading' } | { kind: 'failed'; message: string } | { kind: 'loaded'; overview: FirmOverview };
+type OverviewState = { kind: 'loading' } | { kind: 'failed'; message: string } | { kind: 'loaded'; overview: Json<FirmOverview> };
 
 /** The active firm's members, invitations, API keys and the way out, loaded from the API. */
 export default function FirmSettings({ currentUserId, firmName, myRole, canManageMembers, canManageApiKeys }: FirmSettingsProps) {
   const [state, setState] = useState<OverviewState>({ kind: 'loading' });
 
   const load = useCallback(async () => {
-    const result = await getJson<FirmOverview>('/api/firm');
+    const result = await getJson<Json<FirmOverview>>('/api/firm');
     setState(result.ok ? { kind: 'loaded', overview: result.data } : { kind: 'failed', message: result.failure.message });
   }, []);
 

@@ -1,17 +1,12 @@
 import { useEffect, useState } from 'react';
-import { FIRM_ROLE_LABELS, type FirmRole, isFirmRole } from '../../lib/permissions/roles';
+import type { InvitationForRecipient } from '../../lib/contracts/firms';
+import type { Json } from '../../lib/contracts/json';
+import { FIRM_ROLE_LABELS, isFirmRole } from '../../lib/permissions/roles';
 import FormMessage from '../account/FormMessage';
 import { getJson, postJson } from '../account/post-json';
-import { formatDate } from './firm-types';
+import { formatDate } from './format-date';
 
-interface Invitation {
-  id: string;
-  firmName: string;
-  role: FirmRole | string;
-  email: string;
-  status: string;
-  expiresAt: string;
-}
+type Invitation = Json<InvitationForRecipient>['invitation'];
 
 interface InvitationResponseProps {
   invitationId: string;
@@ -38,7 +33,7 @@ export default function InvitationResponse({ invitationId, signedInEmail }: Invi
   const path = `/api/invitations/${encodeURIComponent(invitationId)}`;
 
   useEffect(() => {
-    void getJson<{ invitation: Invitation }>(path).then((result) =>
+    void getJson<Json<InvitationForRecipient>>(path).then((result) =>
       setState(
         result.ok ? { kind: 'open', invitation: result.data.invitation } : { kind: 'failed', message: result.failure.message },
       ),

@@ -1,4 +1,6 @@
 import { type SyntheticEvent, useState } from 'react';
+import type { FirmInvitation, SentInvitation } from '../../lib/contracts/firms';
+import type { Json } from '../../lib/contracts/json';
 import { ASSIGNABLE_FIRM_ROLES, FIRM_ROLE_LABELS } from '../../lib/permissions/roles';
 import { inviteMemberSchema } from '../../lib/schemas/firm';
 import FormMessage from '../account/FormMessage';
@@ -6,11 +8,11 @@ import { postJson, requestJson } from '../account/post-json';
 import TextField from '../account/TextField';
 import { useSchemaForm } from '../account/use-schema-form';
 import ConfirmButton from './ConfirmButton';
-import { type FirmInvitation, formatDate } from './firm-types';
+import { formatDate } from './format-date';
 import { PANEL_TABLE_CLASS } from './panel-table';
 
 interface InvitePanelProps {
-  invitations: FirmInvitation[];
+  invitations: Json<FirmInvitation>[];
   onChanged(): Promise<void>;
 }
 
@@ -23,7 +25,7 @@ export default function InvitePanel({ invitations, onChanged }: InvitePanelProps
 
   async function onSubmit(event: SyntheticEvent) {
     setSentTo(null);
-    const created = await form.submit(event, (input) => postJson<{ invitation: FirmInvitation }>('/api/firm/invitations', input));
+    const created = await form.submit(event, (input) => postJson<Json<SentInvitation>>('/api/firm/invitations', input));
     if (!created) return;
     setSentTo(created.invitation.email);
     form.setValue('email', '');

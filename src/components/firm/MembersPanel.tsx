@@ -1,13 +1,15 @@
 import { useState } from 'react';
+import type { FirmMember } from '../../lib/contracts/firms';
+import type { Json } from '../../lib/contracts/json';
 import { ASSIGNABLE_FIRM_ROLES, FIRM_ROLE_LABELS } from '../../lib/permissions/roles';
 import FormMessage from '../account/FormMessage';
 import { requestJson } from '../account/post-json';
 import ConfirmButton from './ConfirmButton';
-import { type FirmMember, formatDate } from './firm-types';
+import { formatDate } from './format-date';
 import { PANEL_TABLE_CLASS } from './panel-table';
 
 interface MembersPanelProps {
-  members: FirmMember[];
+  members: Json<FirmMember>[];
   currentUserId: string;
   canManage: boolean;
   onChanged(): Promise<void>;
@@ -27,7 +29,7 @@ export default function MembersPanel({ members, currentUserId, canManage, onChan
     await onChanged();
   }
 
-  const editable = (member: FirmMember) => canManage && member.role !== 'owner' && member.userId !== currentUserId;
+  const editable = (member: Json<FirmMember>) => canManage && member.role !== 'owner' && member.userId !== currentUserId;
 
   return (
     <section className="panel" aria-labelledby="members-heading" data-testid="members-panel">

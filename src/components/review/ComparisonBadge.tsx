@@ -1,4 +1,4 @@
-import type { PoolComparison } from './review-types';
+import type { PoolComparison } from '../../lib/contracts/review';
 
 function ordinal(n: number): string {
   const tens = n % 100;

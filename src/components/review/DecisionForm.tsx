@@ -1,9 +1,9 @@
 import { type SyntheticEvent, useState } from 'react';
+import { type DecisionResult, reviewDecisionSchema } from '../../lib/contracts/review';
 import FormMessage from '../account/FormMessage';
-import { fieldErrorsFromServer } from '../account/field-errors';
+import { fieldErrorsFromServer, fieldErrorsFromZod } from '../account/field-errors';
 import { postJson } from '../account/post-json';
 import { plural } from '../contribute/format';
-import type { DecisionResult } from './review-types';
 
 type Action = 'accept' | 'return' | 'reject';
 
@@ -41,20 +41,17 @@ export default function DecisionForm({ submissionId, pendingCount, recordComment
     event.preventDefault();
     setProblem(null);
     setErrors({});
-    if (action === 'reject' && !comment.trim()) {
-      setErrors({ comment: 'Say why the submission is rejected.' });
-      return;
-    }
-    if (action === 'return' && !comment.trim() && recordComments.length === 0) {
-      setErrors({ comment: 'Say what to correct: here, or on at least one record in the table.' });
-      return;
-    }
-    setBusy(true);
-    const result = await postJson<DecisionResult>(`/api/review/${encodeURIComponent(submissionId)}/decision`, {
+    const parsed = reviewDecisionSchema.safeParse({
       action,
       ...(comment.trim() ? { comment: comment.trim() } : {}),
       ...(action === 'return' && recordComments.length ? { recordComments } : {}),
     });
+    if (!parsed.success) {
+      setErrors(fieldErrorsFromZod(parsed.error.issues));
+      return;
+    }
+    setBusy(true);
+    const result = await postJson<DecisionResult>(`/api/review/${encodeURIComponent(submissionId)}/decision`, parsed.data);
     setBusy(false);
     if (!result.ok) {
       setErrors(fieldErrorsFromServer(result.failure.issues));

@@ -1,6 +1,6 @@
 import { lazy, Suspense } from 'react';
+import type { ReviewRecord } from '../../lib/contracts/review';
 import { FIELD_BY_KEY } from '../../lib/import';
-import type { ReviewRecord } from './review-types';
 
 const ELogSigmaChart = lazy(() => import('./ELogSigmaChart'));
 

@@ -1,21 +1,22 @@
 import { useEffect, useState } from 'react';
+import type { Json } from '../../lib/contracts/json';
+import type { ReviewQueueList } from '../../lib/contracts/review';
 import FormMessage from '../account/FormMessage';
 import { getJson } from '../account/post-json';
 import { formatDateTime, plural } from '../contribute/format';
 import StatusTag from '../contribute/StatusTag';
 import { sourceKindLabel } from '../contribute/status-labels';
 import { PANEL_TABLE_CLASS } from '../firm/panel-table';
-import type { ReviewQueueData } from './review-types';
 import { LONG_WAIT_DAYS, waitingText } from './waiting';
 
-type QueueState = { kind: 'loading' } | { kind: 'failed'; message: string } | { kind: 'loaded'; data: ReviewQueueData };
+type QueueState = { kind: 'loading' } | { kind: 'failed'; message: string } | { kind: 'loaded'; data: Json<ReviewQueueList> };
 
 /** Submissions waiting for a steward, oldest first, with their size, import flags and how long they have waited. */
 export default function ReviewQueue() {
   const [state, setState] = useState<QueueState>({ kind: 'loading' });
 
   useEffect(() => {
-    void getJson<ReviewQueueData>('/api/review').then((result) =>
+    void getJson<Json<ReviewQueueList>>('/api/review').then((result) =>
       setState(result.ok ? { kind: 'loaded', data: result.data } : { kind: 'failed', message: result.failure.message }),
     );
   }, []);

@@ -1,9 +1,9 @@
+import type { ReviewRecord } from '../../lib/contracts/review';
 import { formatValue } from '../contribute/format';
 import { columnHeading, depthRange, storedName } from '../contribute/record-fields';
 import StatusTag from '../contribute/StatusTag';
 import RecordFooter from './RecordFooter';
 import ReviewValueCell from './ReviewValueCell';
-import type { ReviewRecord } from './review-types';
 
 /** The values a steward reads per record, after the depth range, in this order. */
 const REVIEW_FIELDS = [

@@ -1,4 +1,6 @@
 import { useCallback, useEffect, useState } from 'react';
+import type { Json } from '../../lib/contracts/json';
+import type { DecisionResult, ReviewDetail } from '../../lib/contracts/review';
 import FormMessage from '../account/FormMessage';
 import { getJson } from '../account/post-json';
 import { plural } from '../contribute/format';
@@ -6,9 +8,8 @@ import SubmissionHistory from '../contribute/SubmissionHistory';
 import DecisionForm from './DecisionForm';
 import ReviewRecordsTable from './ReviewRecordsTable';
 import ReviewSummary from './ReviewSummary';
-import type { DecisionResult, ReviewDetail } from './review-types';
 
-type DetailState = { kind: 'loading' } | { kind: 'failed'; message: string } | { kind: 'loaded'; data: ReviewDetail };
+type DetailState = { kind: 'loading' } | { kind: 'failed'; message: string } | { kind: 'loaded'; data: Json<ReviewDetail> };
 
 const DECIDABLE = new Set(['submitted', 'in_review']);
 
@@ -36,7 +37,7 @@ export default function ReviewSubmission({ submissionId }: { submissionId: strin
   const [decided, setDecided] = useState<string | null>(null);
 
   const load = useCallback(async () => {
-    const result = await getJson<ReviewDetail>(`/api/review/${encodeURIComponent(submissionId)}`);
+    const result = await getJson<Json<ReviewDetail>>(`/api/review/${encodeURIComponent(submissionId)}`);
     setState(result.ok ? { kind: 'loaded', data: result.data } : { kind: 'failed', message: result.failure.message });
   }, [submissionId]);
 

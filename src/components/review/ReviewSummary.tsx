@@ -1,10 +1,11 @@
+import type { Json } from '../../lib/contracts/json';
+import type { ReviewDetail } from '../../lib/contracts/review';
 import { formatDateTime, plural } from '../contribute/format';
 import StatusTag from '../contribute/StatusTag';
 import { sourceKindLabel } from '../contribute/status-labels';
-import type { ReviewDetail } from './review-types';
 
 /** Who submitted what and when, the state, and how many records carry flags. */
-export default function ReviewSummary({ submission, records }: Pick<ReviewDetail, 'submission' | 'records'>) {
+export default function ReviewSummary({ submission, records }: Pick<Json<ReviewDetail>, 'submission' | 'records'>) {
   const flagged = records.filter((r) => (r.importFlags ?? []).length > 0).length;
   const outlying = records.filter((r) => r.outliers.length > 0).length;
   return (

@@ -1,6 +1,7 @@
+import { recordValue } from '../../lib/contracts/records';
+import type { ReviewRecord } from '../../lib/contracts/review';
 import { formatValue } from '../contribute/format';
 import ComparisonBadge from './ComparisonBadge';
-import type { ReviewRecord } from './review-types';
 
 interface ReviewValueCellProps {
   record: ReviewRecord;
@@ -13,7 +14,7 @@ export default function ReviewValueCell({ record, name }: ReviewValueCellProps) 
   const outlier = record.outliers.includes(name);
   return (
     <td className={`whitespace-nowrap text-right ${outlier ? 'bg-fault-50' : ''}`} data-value={name}>
-      <div>{formatValue(record[name])}</div>
+      <div>{formatValue(recordValue(record, name))}</div>
       {name in record.comparison && (
         <div className="mt-0.5">
           <ComparisonBadge comparison={record.comparison[name]} />

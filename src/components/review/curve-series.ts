@@ -1,4 +1,4 @@
-import type { Increment } from './review-types';
+import type { Increment } from '../../lib/contracts/review';
 
 type Point = [number, number];
 /** A point, or '-' to break the line between two separate stretches of one branch. */

@@ -3,7 +3,8 @@ import { fieldName } from './field-labels';
 /**
  * The importer's one error shape. A file-level error stops the import (the file cannot be read as a
  * table); a row error names the row (and field) a person must fix. Codes are stable: the server maps
- * them to HTTP statuses and the browser may branch on them; messages are plain English for people.
+ * them to HTTP statuses (in its error mapper) and the browser may branch on them; messages are plain
+ * English for people.
  */
 export const IMPORT_ERROR_CODES = [
   'EMPTY_FILE',
@@ -41,30 +42,6 @@ export interface ImportError {
   message: string;
   issues?: readonly ImportIssue[];
 }
-
-/** The HTTP status a server answers with for each file-level error. */
-export const IMPORT_ERROR_HTTP_STATUS: Readonly<Record<ImportErrorCode, 400 | 413 | 422>> = {
-  EMPTY_FILE: 422,
-  TOO_LARGE: 413,
-  BINARY_FILE: 422,
-  SPREADSHEET_FILE: 422,
-  UTF16_FILE: 422,
-  NOT_UTF8: 422,
-  DELIMITER_NOT_FOUND: 422,
-  DELIMITER_AMBIGUOUS: 422,
-  DELIMITER_MISMATCH: 422,
-  HEADER_UNCLOSED_QUOTE: 422,
-  HEADER_EMPTY_NAME: 422,
-  HEADER_DUPLICATE_NAME: 422,
-  NO_ROWS: 422,
-  TOO_MANY_ROWS: 422,
-  BAD_MAPPING: 400,
-  NOT_AGS4: 422,
-  AGS4_MALFORMED: 422,
-  AGS4_UNKNOWN_UNIT: 422,
-  AGS4_NO_TESTS: 422,
-  READ_FAILED: 422,
-};
 
 /**
  * A problem with one row. `row` follows the importer's numbering (see `row-numbers.ts`); `field` is an

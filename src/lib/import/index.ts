@@ -13,7 +13,6 @@ export { applyEdits } from './edit-rows';
 export {
   formatRowError,
   IMPORT_ERROR_CODES,
-  IMPORT_ERROR_HTTP_STATUS,
   type ImportError,
   type ImportErrorCode,
   type ImportResult,

@@ -74,6 +74,14 @@ export const PLATFORM_ROLE_GRANTS: Record<PlatformRole, { everywhere: Grants; in
   user: { everywhere: {}, inOwnFirm: {} },
 };
 
+/** Grants of a firm API key: a partner script may only contribute to the key's own firm. */
+export const API_KEY_GRANTS = { submission: ['create'] } as const satisfies Grants;
+
+/** Grants as `resource:action` strings, e.g. for an API answer. */
+export function grantList(grants: Grants): string[] {
+  return Object.entries(grants).flatMap(([resource, actions]) => (actions ?? []).map((action) => `${resource}:${action}`));
+}
+
 /** What the permission check needs to know about the person asking. */
 export interface Actor {
   userId: string;

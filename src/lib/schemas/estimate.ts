@@ -8,3 +8,5 @@ export const saveEstimateSchema = z.strictObject({
   input: z.record(z.string(), z.unknown(), { error: 'input must be the estimate profile as a JSON object.' }),
   resultSummary: z.record(z.string(), z.unknown()).nullable().optional(),
 });
+
+export type SaveEstimateInput = z.infer<typeof saveEstimateSchema>;

@@ -14,3 +14,5 @@ export const recordCorrectionSchema = z.strictObject({
       }
     }),
 });
+
+export type RecordCorrection = z.infer<typeof recordCorrectionSchema>;

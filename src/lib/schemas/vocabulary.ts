@@ -15,6 +15,7 @@ export const GENESIS_VALUES = [
   'colluvial',
   'other',
 ] as const;
+export type Genesis = (typeof GENESIS_VALUES)[number];
 
 const name = z
   .string({ error: 'Enter a name.' })
@@ -34,3 +35,8 @@ export const createUnitSchema = z.strictObject({
   typicalRegionId: z.uuid({ error: 'Choose a region from the list.' }).nullable().optional(),
 });
 export const updateUnitSchema = createUnitSchema.partial();
+
+export type CreateRegionInput = z.infer<typeof createRegionSchema>;
+export type UpdateRegionInput = z.infer<typeof updateRegionSchema>;
+export type CreateUnitInput = z.infer<typeof createUnitSchema>;
+export type UpdateUnitInput = z.infer<typeof updateUnitSchema>;

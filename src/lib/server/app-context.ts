@@ -1,8 +1,9 @@
+import { type AppServices, lazyServicesOf } from './app-services';
 import { type AppContext, buildAppContext } from './build-context';
 import { config } from './config';
 import { createMailer } from './mail/mailer';
 
-const holder = globalThis as typeof globalThis & { __claybank?: AppContext };
+const holder = globalThis as typeof globalThis & { __claybank?: AppContext; __claybankServices?: AppServices };
 
 export class MissingConfigurationError extends Error {
   constructor(readonly variable: string) {
@@ -26,5 +27,8 @@ export function appContext(): AppContext {
   return holder.__claybank;
 }
 
-export const db = () => appContext().database.db;
-export const auth = () => appContext().auth;
+/** The app's services, as the middleware puts them in `locals.app` for every request. */
+export function appServices(): AppServices {
+  holder.__claybankServices ??= lazyServicesOf(appContext, config.appUrl);
+  return holder.__claybankServices;
+}

@@ -9,11 +9,10 @@ const { db } = connectDatabase(env('SCRATCH_APP_URL'), { max: 1 });
 const bytes = new TextEncoder().encode(`child upload ${env('LABEL')}`);
 console.log('storing');
 await storeSubmission(
-  db,
+  { db, appUrl: 'http://127.0.0.1:4321' },
   { userId: env('USER_ID'), firmId: env('FIRM_ID'), ipAddress: null, via: 'seed' },
   { kind: 'csv', name: 'child.csv', mediaType: 'text/csv', bytes, sha256: createHash('sha256').update(bytes).digest('hex') },
   manyRecords(Number(env('ROWS')), env('REGION_ID'), env('UNIT_ID')),
-  'http://127.0.0.1:4321',
 );
 console.log('stored');
 await db.destroy();

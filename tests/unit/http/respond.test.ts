@@ -5,6 +5,7 @@ import { ApiError } from '../../../src/lib/server/http/api-error';
 import { errorResponse, handleApi, readJsonBody } from '../../../src/lib/server/http/respond';
 
 const context = {
+  locals: {},
   request: new Request('http://127.0.0.1/api/x', { method: 'POST' }),
   url: new URL('http://127.0.0.1/api/x'),
 } as unknown as APIContext;

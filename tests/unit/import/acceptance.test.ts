@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { autoMapColumns } from '../../../src/lib/import/column-match';
-import { IMPORT_ERROR_HTTP_STATUS } from '../../../src/lib/import/errors';
 import { MAX_FILE_BYTES } from '../../../src/lib/import/limits';
 import { mapRows } from '../../../src/lib/import/map-rows';
 import { parseCsv } from '../../../src/lib/import/parse-csv';
 import { KPA_PER_PSF } from '../../../src/lib/import/units';
 import { validateRows } from '../../../src/lib/import/validate-rows';
+import { importErrorStatus } from '../../../src/lib/server/http/error-mapper';
 import { fixture, importCsv, VOCABULARY } from '../../fixtures/import/pipeline';
 
 // One test per kind of file the README's upload rules name; each checks the outcome and a key phrase of the message.
@@ -47,7 +47,7 @@ describe('the files an upload must handle', () => {
   ])('%s: %s', (name, code, phrase, status) => {
     const result = parseCsv(fixture(name));
     expect(result).toMatchObject({ ok: false, error: { code, message: expect.stringContaining(phrase) } });
-    if (!result.ok) expect(IMPORT_ERROR_HTTP_STATUS[result.error.code]).toBe(status);
+    if (!result.ok) expect(importErrorStatus(result.error.code)).toBe(status);
   });
 
   it('wrong units (psf under a kPa header): caught by the σ′p range and the σ′v0-by-depth check', () => {
@@ -118,6 +118,6 @@ describe('the files an upload must handle', () => {
       ok: false,
       error: { code: 'TOO_LARGE', message: expect.stringContaining('the largest file Claybank reads is 20.0 MB') },
     });
-    if (!result.ok) expect(IMPORT_ERROR_HTTP_STATUS[result.error.code]).toBe(413);
+    if (!result.ok) expect(importErrorStatus(result.error.code)).toBe(413);
   });
 });

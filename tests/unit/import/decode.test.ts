@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { decodeText, utf8Length } from '../../../src/lib/import/decode';
-import { IMPORT_ERROR_HTTP_STATUS } from '../../../src/lib/import/errors';
 import { MAX_FILE_BYTES } from '../../../src/lib/import/limits';
 import { parseCsv } from '../../../src/lib/import/parse-csv';
+import { importErrorStatus } from '../../../src/lib/server/http/error-mapper';
 
 const bytes = (...values: number[]) => new Uint8Array(values);
 const utf8 = (text: string) => new TextEncoder().encode(text);
@@ -55,7 +55,7 @@ describe('decoding an upload', () => {
     expect(result).toMatchObject({ ok: false, error: { code: 'TOO_LARGE' } });
     if (!result.ok) {
       expect(result.error.message).toContain('20.0 MB');
-      expect(IMPORT_ERROR_HTTP_STATUS[result.error.code]).toBe(413);
+      expect(importErrorStatus(result.error.code)).toBe(413);
     }
     expect(decodeText(new Uint8Array(MAX_FILE_BYTES).fill(0x61))).toMatchObject({ ok: true });
   });

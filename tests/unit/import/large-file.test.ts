@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { autoMapColumns } from '../../../src/lib/import/column-match';
-import { IMPORT_ERROR_HTTP_STATUS } from '../../../src/lib/import/errors';
 import { MAX_FILE_BYTES, MAX_ROWS } from '../../../src/lib/import/limits';
 import { mapRows } from '../../../src/lib/import/map-rows';
 import { parseCsv } from '../../../src/lib/import/parse-csv';
 import { validateRows } from '../../../src/lib/import/validate-rows';
+import { importErrorStatus } from '../../../src/lib/server/http/error-mapper';
 import { VOCABULARY } from '../../fixtures/import/pipeline';
 
 const HEADER =
@@ -47,6 +47,6 @@ describe('the largest uploads', () => {
       ok: false,
       error: { code: 'TOO_MANY_ROWS', message: expect.stringContaining('more than 100,000 data rows') },
     });
-    if (!result.ok) expect(IMPORT_ERROR_HTTP_STATUS[result.error.code]).toBe(422);
+    if (!result.ok) expect(importErrorStatus(result.error.code)).toBe(422);
   });
 });

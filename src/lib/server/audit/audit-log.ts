@@ -1,5 +1,7 @@
-import type { Kysely } from 'kysely';
+import type { Kysely, Transaction } from 'kysely';
 import type { Database } from '../db/schema';
+import type { ActingPerson } from './acting-person';
+import { insertAuditEntry } from './audit-repository';
 
 export interface AuditEvent {
   actorUserId: string | null;
@@ -14,19 +16,16 @@ export interface AuditEvent {
   ipAddress?: string | null;
 }
 
-/** Appends one entry to the audit log. */
+/** The actor fields of an audit event, from the acting person (`firmId` as they act for it). */
+export function auditedBy(person: ActingPerson): Pick<AuditEvent, 'actorUserId' | 'firmId' | 'ipAddress'> {
+  return { actorUserId: person.userId, firmId: person.firmId, ipAddress: person.ipAddress };
+}
+
+/**
+ * Appends one entry to the audit log on its own (a refusal, a sign-in). Inside a service's
+ * transaction, use `insertAuditEntry(trx, …)` so the entry commits or rolls back with the change.
+ */
 export async function recordAudit(db: Kysely<Database>, event: AuditEvent): Promise<void> {
-  await db
-    .insertInto('audit_log')
-    .values({
-      actor_user_id: event.actorUserId,
-      firm_id: event.firmId,
-      action: event.action,
-      outcome: event.outcome ?? 'ok',
-      object_type: event.objectType ?? null,
-      object_id: event.objectId ?? null,
-      summary: JSON.stringify(event.summary ?? {}),
-      ip_address: event.ipAddress ?? null,
-    })
-    .execute();
+  if (db.isTransaction) return insertAuditEntry(db as Transaction<Database>, event);
+  await db.transaction().execute((trx) => insertAuditEntry(trx, event));
 }

@@ -1,22 +1,33 @@
 import { APIError } from 'better-auth/api';
-import { ApiError, type ErrorCode } from '../http/api-error';
+import {
+  ConflictError,
+  type DomainError,
+  MalformedRequestError,
+  NotFoundError,
+  RateLimitedError,
+  RefusedError,
+  UnauthenticatedError,
+  UnprocessableError,
+} from '../errors';
 
-const STATUS_TO_CODE: Record<number, ErrorCode> = {
-  400: 'BAD_REQUEST',
-  401: 'UNAUTHENTICATED',
-  403: 'FORBIDDEN',
-  404: 'NOT_FOUND',
-  409: 'CONFLICT',
-  422: 'UNPROCESSABLE',
-  429: 'RATE_LIMITED',
+const malformed = (message: string) => new MalformedRequestError(message);
+
+const STATUS_TO_ERROR: Record<number, (message: string) => DomainError> = {
+  400: malformed,
+  401: (message) => new UnauthenticatedError(message),
+  403: (message) => new RefusedError(message),
+  404: (message) => new NotFoundError(message),
+  409: (message) => new ConflictError(message),
+  422: (message) => new UnprocessableError(message),
+  429: (message) => new RateLimitedError(message, 60),
 };
 
-/** Re-throws a better-auth error in our error shape; `messages` gives plain wording per better-auth code. */
+/** Re-throws a better-auth error as our domain error; `messages` gives plain wording per better-auth code. */
 export function rethrowAuthError(error: unknown, messages: Record<string, string> = {}, fallback?: string): never {
   if (error instanceof APIError) {
     const authCode = typeof error.body?.code === 'string' ? error.body.code : '';
-    const code = STATUS_TO_CODE[error.statusCode] ?? 'BAD_REQUEST';
-    throw new ApiError(code, messages[authCode] ?? fallback ?? error.body?.message ?? 'The request was refused.');
+    const message = messages[authCode] ?? fallback ?? error.body?.message ?? 'The request was refused.';
+    throw (STATUS_TO_ERROR[error.statusCode] ?? malformed)(message);
   }
   throw error;
 }

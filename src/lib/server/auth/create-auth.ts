@@ -2,7 +2,7 @@ import { apiKey } from '@better-auth/api-key';
 import { type BetterAuthOptions, betterAuth } from 'better-auth';
 import { admin, organization } from 'better-auth/plugins';
 import type pg from 'pg';
-import { FIRM_ROLE_LABELS, isFirmRole } from '../../permissions/roles';
+import { API_KEY_GRANTS, FIRM_ROLE_LABELS, isFirmRole } from '../../permissions/roles';
 import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from '../../schemas/account';
 import type { OutgoingMail } from '../mail/mailer';
 import { existingAccountMail, invitationMail, passwordResetMail, verificationMail } from '../mail/templates';
@@ -118,7 +118,7 @@ export function createAuth(deps: AuthDependencies) {
           maximumNameLength: 60,
           // Partner scripts upload in batches; the plugin's default (10 a day) would stop them.
           rateLimit: { enabled: true, timeWindow: 60_000, maxRequests: 600 },
-          permissions: { defaultPermissions: { submission: ['create'] } },
+          permissions: { defaultPermissions: { ...API_KEY_GRANTS } },
         },
       ]),
       ...(deps.extraPlugins ?? []),

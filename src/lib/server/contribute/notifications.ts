@@ -1,21 +1,18 @@
-import type { Kysely } from 'kysely';
+import type { Transaction } from 'kysely';
 import type { Database } from '../db/schema';
+import { findFirm } from '../firms/firm-repository';
 import type { QueuedMail } from '../mail/outbox';
+import { personRecipient, stewardRecipients } from '../mail/recipient-repository';
 
 const SIGNATURE = '\n\n— Claybank\nPreliminary assessment only; pooled data of varying quality.';
 
 /** One mail per steward for a new (or corrected) submission: a digest, not one mail per record. */
 export async function stewardsNewSubmissionMails(
-  db: Kysely<Database>,
+  trx: Transaction<Database>,
   facts: { submissionId: string; firmId: string; rowCount: number; flaggedRows: number; appUrl: string; resubmitted: boolean },
 ): Promise<QueuedMail[]> {
-  const stewards = await db
-    .selectFrom('user')
-    .select(['email', 'name'])
-    .where('role', '=', 'steward')
-    .where('banned', 'is not', true)
-    .execute();
-  const firm = await db.selectFrom('organization').select('name').where('id', '=', facts.firmId).executeTakeFirst();
+  const stewards = await stewardRecipients(trx);
+  const firm = await findFirm(trx, facts.firmId);
   const what = facts.resubmitted ? 'corrected and sent back' : 'submitted';
   const flagged = facts.flaggedRows
     ? `\n${facts.flaggedRows} of them carry import flags (free text that may identify a site).`
@@ -41,12 +38,12 @@ export interface DecisionFacts {
 
 /** One mail to the person who submitted, with every per-record comment in it. */
 export async function contributorDecisionMail(
-  db: Kysely<Database>,
+  trx: Transaction<Database>,
   submittedBy: string | null,
   facts: DecisionFacts,
 ): Promise<QueuedMail[]> {
   if (!submittedBy) return [];
-  const person = await db.selectFrom('user').select(['email', 'name']).where('id', '=', submittedBy).executeTakeFirst();
+  const person = await personRecipient(trx, submittedBy);
   if (!person) return [];
   const link = `${facts.appUrl}/contribute/submissions/${facts.submissionId}`;
   const comments = facts.recordComments.length

@@ -1,15 +1,13 @@
-import type { Kysely } from 'kysely';
+import type { CheckColumns } from '../../contracts/submissions';
 import {
   applyEdits,
   autoMapColumns,
-  duplicateKey,
   IMPORT_FIELDS,
   type ImportError,
   MAX_FILE_BYTES,
   mapRows,
   parseCsv,
   type RawRow,
-  type RememberedMapping,
   type RowError,
   readAgs4,
   type SharedViewEntry,
@@ -18,17 +16,17 @@ import {
   validateRows,
 } from '../../import';
 import type { UploadOptions } from '../../schemas/upload-options';
-import type { Database } from '../db/schema';
+import type { AppServices } from '../app-services';
+import { firmScope } from '../tenancy/scope';
 import { inTenantTransaction } from '../tenancy/tenant-transaction';
+import { importVocabulary } from '../vocabulary/vocabulary-service';
+import { rememberedMapping } from './field-mapping';
+import { firmRecordKeys } from './firm-record-keys';
 import type { RecordToStore } from './record-to-store';
 import { toRecordToStore } from './to-record';
 
-export interface PreparedColumns {
-  headers: string[];
-  mapping: (string | null)[];
-  units: Record<string, string>;
-  missingRequired: string[];
-}
+/** The column choices an upload was read with (the check answer shows them). */
+export type PreparedColumns = CheckColumns;
 
 export type PreparedUpload =
   | { ok: false; error: ImportError }
@@ -45,49 +43,8 @@ export type PreparedUpload =
 
 const PREVIEW_ROWS = 25;
 
-export async function loadVocabulary(db: Kysely<Database>) {
-  const regions = await db.selectFrom('region').select(['id', 'name', 'slug']).execute();
-  const units = await db.selectFrom('geological_unit').select(['id', 'name', 'slug']).execute();
-  return { regions, units };
-}
-
-/** Duplicate keys of the firm's tests already in the bank (any status but rejected or withdrawn). */
-async function existingKeys(db: Kysely<Database>, firmId: string): Promise<Set<string>> {
-  const rows = await inTenantTransaction(db, { firmId, platformRole: 'user' }, (trx) =>
-    trx
-      .selectFrom('test_record as r')
-      .innerJoin('test_record_private as p', 'p.test_record_id', 'r.id')
-      .select(['p.borehole_id', 'p.sample_id', 'r.depth_top_m', 'r.depth_bottom_m'])
-      .where('r.firm_id', '=', firmId)
-      .where('r.status', 'not in', ['rejected', 'withdrawn'])
-      .execute(),
-  );
-  return new Set(
-    rows.map((row) =>
-      duplicateKey({
-        boreholeId: row.borehole_id ?? '',
-        sampleId: row.sample_id,
-        depthTop: row.depth_top_m,
-        depthBottom: row.depth_bottom_m,
-      }),
-    ),
-  );
-}
-
-export async function rememberedMapping(db: Kysely<Database>, firmId: string): Promise<RememberedMapping> {
-  const row = await inTenantTransaction(db, { firmId, platformRole: 'user' }, (trx) =>
-    trx
-      .selectFrom('field_mapping')
-      .select('mapping')
-      .where('firm_id', '=', firmId)
-      .where('name', '=', 'default')
-      .executeTakeFirst(),
-  );
-  return (row?.mapping ?? {}) as RememberedMapping;
-}
-
 /** Reads the file into raw rows with the person's (or the remembered, or the automatic) column choices. */
-async function readRows(db: Kysely<Database>, firmId: string, bytes: Uint8Array, options: UploadOptions) {
+async function readRows(app: Pick<AppServices, 'db'>, firmId: string, bytes: Uint8Array, options: UploadOptions) {
   if (options.format === 'ags4') {
     const read = readAgs4(bytes, { region: options.region ?? '', geologyMap: options.geologyMap });
     if (!read.ok) return read;
@@ -102,7 +59,7 @@ async function readRows(db: Kysely<Database>, firmId: string, bytes: Uint8Array,
   const parsed = parseCsv(bytes, { delimiter: options.delimiter });
   if (!parsed.ok) return parsed;
   const headers = parsed.table.headers;
-  const auto = options.mapping ? null : autoMapColumns(headers, await rememberedMapping(db, firmId));
+  const auto = options.mapping ? null : autoMapColumns(headers, await rememberedMapping(app, firmId));
   const mapping = options.mapping ?? auto?.mapping ?? [];
   const units = (options.units ?? auto?.units ?? {}) as Record<string, string>;
   const defaults = options.region ? { region: options.region } : undefined;
@@ -127,7 +84,7 @@ async function readRows(db: Kysely<Database>, firmId: string, bytes: Uint8Array,
  * uploads, and split each valid row into its shared and private parts. Stores nothing.
  */
 export async function prepareUpload(
-  db: Kysely<Database>,
+  app: Pick<AppServices, 'db'>,
   firmId: string,
   bytes: Uint8Array,
   options: UploadOptions,
@@ -141,14 +98,18 @@ export async function prepareUpload(
       },
     };
   }
-  const read = await readRows(db, firmId, bytes, options);
+  const read = await readRows(app, firmId, bytes, options);
   if (!read.ok) return read;
-  return prepareRawRows(db, firmId, read.rows, { notices: read.notices, columns: read.columns, geologyCodes: read.geologyCodes });
+  return prepareRawRows(app, firmId, read.rows, {
+    notices: read.notices,
+    columns: read.columns,
+    geologyCodes: read.geologyCodes,
+  });
 }
 
 /** The checking half of prepareUpload, for rows that did not come from a file (JSON from a partner script). */
 export async function prepareRawRows(
-  db: Kysely<Database>,
+  app: Pick<AppServices, 'db'>,
   firmId: string,
   rows: RawRow[],
   context: { notices: string[]; columns: PreparedColumns | null; geologyCodes: string[] } = {
@@ -157,8 +118,9 @@ export async function prepareRawRows(
     geologyCodes: [],
   },
 ): Promise<PreparedUpload> {
-  const vocabulary = await loadVocabulary(db);
-  const { valid, errors } = validateRows(rows, { ...vocabulary, existingKeys: await existingKeys(db, firmId) });
+  const vocabulary = await importVocabulary(app);
+  const existingKeys = await inTenantTransaction(app.db, firmScope(firmId), (trx) => firmRecordKeys(trx, firmId));
+  const { valid, errors } = validateRows(rows, { ...vocabulary, existingKeys });
   return { ok: true, rowCount: rows.length, valid, records: valid.map(toRecordToStore), errors, ...context };
 }
 

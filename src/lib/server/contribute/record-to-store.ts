@@ -119,15 +119,3 @@ export const PRIVATE_COLUMNS: readonly { name: keyof PrivateValues; type: string
 export function toPrivateValues(part: PrivatePart): PrivateValues {
   return Object.fromEntries(PRIVATE_KEYS.map((key) => [PRIVATE_COLUMN_OF[key], part[key]])) as PrivateValues;
 }
-
-/** The key that finds the same test in two uploads: borehole, sample and depths. */
-export function duplicateKey(
-  boreholeId: string | null,
-  sampleId: string | null,
-  depthTopM: number,
-  depthBottomM: number,
-): string {
-  return [boreholeId ?? '', sampleId ?? '', depthTopM.toFixed(3), depthBottomM.toFixed(3)]
-    .map((part) => part.toLowerCase())
-    .join('|');
-}

@@ -1,25 +1,21 @@
 import { randomUUID } from 'node:crypto';
-import type { Kysely, Transaction } from 'kysely';
-import { recordAudit } from '../audit/audit-log';
-import type { SubmissionSourceKind } from '../db/bank-tables';
-import { bulkInsert } from '../db/bulk-insert';
+import type { Transaction } from 'kysely';
+import type { StoredSubmission, SubmissionSourceKind } from '../../contracts/submissions';
+import type { AppServices } from '../app-services';
 import type { Database } from '../db/schema';
 import { uuidV7 } from '../db/uuid-v7';
-import { ApiError } from '../http/api-error';
+import { ConflictError, UnprocessableError } from '../errors';
 import { enqueueMail } from '../mail/outbox';
+import { insertIncrements, insertPrivateRecords, insertSharedRecords } from '../records/record-store-repository';
+import { findLiveSubmissionOfFile, insertSubmission, insertSubmissionFile } from '../submissions/submission-repository';
+import { transitionSubmission } from '../submissions/transition';
+import { firmScope } from '../tenancy/scope';
 import { inTenantTransaction } from '../tenancy/tenant-transaction';
+import type { Contributor } from './contributor';
 import { stewardsNewSubmissionMails } from './notifications';
-import { PRIVATE_COLUMNS, type RecordToStore, SHARED_COLUMNS } from './record-to-store';
+import type { RecordToStore } from './record-to-store';
 
-export interface Contributor {
-  /** null when a firm API key submitted */
-  userId: string | null;
-  firmId: string;
-  ipAddress: string | null;
-  /** 'api' when a firm API key submitted, for the audit log */
-  via: 'browser' | 'api' | 'seed';
-  apiKeyId?: string | null;
-}
+export type { Contributor } from './contributor';
 
 export interface SourceFile {
   kind: SubmissionSourceKind;
@@ -29,23 +25,63 @@ export interface SourceFile {
   sha256: string;
 }
 
-export interface StoredSubmission {
-  id: string;
-  status: 'submitted';
-  rowCount: number;
-  incrementCount: number;
-  flaggedRows: number;
+/** 409 when the firm has a live submission (not withdrawn or rejected) of the same file. */
+export async function refuseSameFile(trx: Transaction<Database>, firmId: string, sha256: string): Promise<void> {
+  const earlier = await findLiveSubmissionOfFile(trx, firmId, sha256);
+  if (earlier) {
+    throw new ConflictError(
+      `This file was already uploaded as submission ${earlier.id} (${earlier.status}); nothing was stored again.`,
+    );
+  }
 }
 
-/** A submission of this firm with the same file that is still alive (not withdrawn or rejected). */
-async function sameFileSubmission(trx: Transaction<Database>, firmId: string, sha256: string) {
-  return trx
-    .selectFrom('submission')
-    .select(['id', 'status'])
-    .where('firm_id', '=', firmId)
-    .where('source_checksum_sha256', '=', sha256)
-    .where('status', 'not in', ['withdrawn', 'rejected'])
-    .executeTakeFirst();
+/** The submission (as a draft, until the transition below) and its original file in firm-private storage. */
+async function insertSubmissionAndFile(
+  trx: Transaction<Database>,
+  submissionId: string,
+  contributor: Contributor,
+  source: SourceFile,
+  rowCount: number,
+): Promise<void> {
+  await insertSubmission(trx, {
+    id: submissionId,
+    firm_id: contributor.firmId,
+    submitted_by: contributor.userId,
+    source_kind: source.kind,
+    source_file_name: source.name,
+    source_checksum_sha256: source.sha256,
+    source_size_bytes: source.bytes.byteLength,
+    status: 'draft',
+    row_count: rowCount,
+  });
+  await insertSubmissionFile(trx, {
+    submission_id: submissionId,
+    firm_id: contributor.firmId,
+    storage_name: `${submissionId}/${randomUUID()}`,
+    original_name: source.name ?? 'upload',
+    media_type: source.mediaType,
+    size_bytes: source.bytes.byteLength,
+    sha256: source.sha256,
+    content: Buffer.from(source.bytes),
+  });
+}
+
+/** Every record's shared and private part and raw readings; returns how many increments were stored. */
+async function insertRecords(
+  trx: Transaction<Database>,
+  submissionId: string,
+  firmId: string,
+  records: readonly RecordToStore[],
+): Promise<number> {
+  const ids = records.map(() => uuidV7());
+  await insertSharedRecords(trx, { submissionId, firmId }, records, ids);
+  await insertPrivateRecords(trx, firmId, records, ids);
+  const increments = records.flatMap((record, i) => {
+    const recordId = ids[i];
+    return recordId ? record.increments.map((inc) => ({ ...inc, recordId })) : [];
+  });
+  await insertIncrements(trx, increments);
+  return increments.length;
 }
 
 /**
@@ -56,145 +92,45 @@ async function sameFileSubmission(trx: Transaction<Database>, firmId: string, sh
  * stored twice.
  */
 export async function storeSubmission(
-  db: Kysely<Database>,
+  app: Pick<AppServices, 'db' | 'appUrl'>,
   contributor: Contributor,
   source: SourceFile,
   records: RecordToStore[],
-  appUrl: string,
 ): Promise<StoredSubmission> {
-  if (records.length === 0) throw new ApiError('UNPROCESSABLE', 'The file has no test records to store.');
-  return inTenantTransaction(db, { firmId: contributor.firmId, platformRole: 'user' }, async (trx) => {
-    const earlier = await sameFileSubmission(trx, contributor.firmId, source.sha256);
-    if (earlier) {
-      throw new ApiError(
-        'CONFLICT',
-        `This file was already uploaded as submission ${earlier.id} (${earlier.status}); nothing was stored again.`,
-      );
-    }
+  if (records.length === 0) throw new UnprocessableError('The file has no test records to store.');
+  return inTenantTransaction(app.db, firmScope(contributor.firmId), async (trx) => {
+    await refuseSameFile(trx, contributor.firmId, source.sha256);
     const submissionId = randomUUID();
-    const now = new Date();
-    await trx
-      .insertInto('submission')
-      .values({
-        id: submissionId,
-        firm_id: contributor.firmId,
-        submitted_by: contributor.userId,
-        source_kind: source.kind,
-        source_file_name: source.name,
-        source_checksum_sha256: source.sha256,
-        source_size_bytes: source.bytes.byteLength,
-        status: 'submitted',
-        row_count: records.length,
-        submitted_at: now,
-      })
-      .execute();
-    await trx
-      .insertInto('submission_file')
-      .values({
-        submission_id: submissionId,
-        firm_id: contributor.firmId,
-        storage_name: `${submissionId}/${randomUUID()}`,
-        original_name: source.name ?? 'upload',
-        media_type: source.mediaType,
-        size_bytes: source.bytes.byteLength,
-        sha256: source.sha256,
-        content: Buffer.from(source.bytes),
-      })
-      .execute();
-
-    const ids = records.map(() => uuidV7());
-    await bulkInsert(
-      trx,
-      'test_record',
-      [
-        { name: 'id', type: 'uuid' },
-        { name: 'submission_id', type: 'uuid' },
-        { name: 'firm_id', type: 'text' },
-        { name: 'row_number', type: 'integer' },
-        { name: 'import_flags', type: 'jsonb' },
-        ...SHARED_COLUMNS,
-      ],
-      records.map((record, i) => [
-        ids[i],
-        submissionId,
-        contributor.firmId,
-        record.rowNumber,
-        JSON.stringify(record.flags),
-        ...SHARED_COLUMNS.map((column) => record.shared[column.name]),
-      ]),
-    );
-    await bulkInsert(
-      trx,
-      'test_record_private',
-      [{ name: 'test_record_id', type: 'uuid' }, { name: 'firm_id', type: 'text' }, ...PRIVATE_COLUMNS],
-      records.map((record, i) => [ids[i], contributor.firmId, ...PRIVATE_COLUMNS.map((column) => record.private[column.name])]),
-    );
-    const increments = records.flatMap((record, i) =>
-      record.increments.map((inc) => [
-        ids[i],
-        inc.incrementNo,
-        inc.appliedStressKpa,
-        inc.isUnloading,
-        inc.durationHours,
-        inc.endDeformationMm,
-        inc.endVoidRatio,
-        inc.specimenHeightMm,
-      ]),
-    );
-    await bulkInsert(
-      trx,
-      'oedometer_increment',
-      [
-        { name: 'test_record_id', type: 'uuid' },
-        { name: 'increment_no', type: 'integer' },
-        { name: 'applied_stress_kpa', type: 'numeric' },
-        { name: 'is_unloading', type: 'boolean' },
-        { name: 'duration_hours', type: 'numeric' },
-        { name: 'end_deformation_mm', type: 'numeric' },
-        { name: 'end_void_ratio', type: 'numeric' },
-        { name: 'specimen_height_mm', type: 'numeric' },
-      ],
-      increments,
-    );
-    await trx
-      .insertInto('submission_event')
-      .values({
-        submission_id: submissionId,
-        actor_user_id: contributor.userId,
-        from_status: null,
-        to_status: 'submitted',
-        comment: null,
-      })
-      .execute();
+    await insertSubmissionAndFile(trx, submissionId, contributor, source, records.length);
+    const incrementCount = await insertRecords(trx, submissionId, contributor.firmId, records);
     const flaggedRows = records.filter((record) => record.flags.length > 0).length;
-    await recordAudit(trx, {
-      actorUserId: contributor.userId,
+    await transitionSubmission(trx, {
+      submissionId,
       firmId: contributor.firmId,
+      from: null,
+      to: 'submitted',
+      actor: contributor,
       action: 'submission.uploaded',
-      objectType: 'submission',
-      objectId: submissionId,
+      set: { submitted_at: new Date() },
       summary: {
         via: contributor.via,
         apiKeyId: contributor.apiKeyId ?? null,
         file: source.name,
         sha256: source.sha256,
         rows: records.length,
-        increments: increments.length,
+        increments: incrementCount,
         flaggedRows,
       },
-      ipAddress: contributor.ipAddress,
     });
-    await enqueueMail(
-      trx,
-      await stewardsNewSubmissionMails(trx, {
-        submissionId,
-        firmId: contributor.firmId,
-        rowCount: records.length,
-        flaggedRows,
-        appUrl,
-        resubmitted: false,
-      }),
-    );
-    return { id: submissionId, status: 'submitted', rowCount: records.length, incrementCount: increments.length, flaggedRows };
+    const mails = await stewardsNewSubmissionMails(trx, {
+      submissionId,
+      firmId: contributor.firmId,
+      rowCount: records.length,
+      flaggedRows,
+      appUrl: app.appUrl,
+      resubmitted: false,
+    });
+    await enqueueMail(trx, mails);
+    return { id: submissionId, status: 'submitted', rowCount: records.length, incrementCount, flaggedRows };
   });
 }

@@ -1,18 +1,23 @@
-import type { Kysely } from 'kysely';
-import { mappingToRemember, type RawRow } from '../../import';
-import type { Database } from '../db/schema';
-import { ApiError } from '../http/api-error';
+import type { CheckResult, StoredSubmission } from '../../contracts/submissions';
+import type { RawRow } from '../../import';
+import type { AppServices } from '../app-services';
+import { ImportFileError, UnprocessableError } from '../errors';
+import { firmScope } from '../tenancy/scope';
 import { inTenantTransaction } from '../tenancy/tenant-transaction';
+import type { Contributor } from './contributor';
+import { rememberMapping } from './field-mapping';
 import { type PreparedUpload, prepareRawRows, prepareUpload, previewOf } from './prepare-upload';
-import { type Contributor, storeSubmission } from './store-submission';
-import { importFailure, type UploadRequest } from './upload-request';
+import { refuseSameFile, storeSubmission } from './store-submission';
+import type { UploadRequest } from './upload-request';
 
 const MAX_ISSUES = 500;
 
+type Prepared = Extract<PreparedUpload, { ok: true }>;
+
 /** A dry run: what the upload would store, every row problem, and the shared view of the first rows. */
-export async function checkUpload(db: Kysely<Database>, firmId: string, upload: UploadRequest) {
-  const prepared = await prepareUpload(db, firmId, upload.bytes, upload.options);
-  if (!prepared.ok) throw importFailure(prepared.error);
+export async function checkUpload(app: Pick<AppServices, 'db'>, firmId: string, upload: UploadRequest): Promise<CheckResult> {
+  const prepared = await prepareUpload(app, firmId, upload.bytes, upload.options);
+  if (!prepared.ok) throw new ImportFileError(prepared.error);
   return {
     rowCount: prepared.rowCount,
     validCount: prepared.valid.length,
@@ -25,61 +30,50 @@ export async function checkUpload(db: Kysely<Database>, firmId: string, upload: 
   };
 }
 
-function rowIssues(prepared: Extract<PreparedUpload, { ok: true }>) {
-  return prepared.errors
-    .slice(0, MAX_ISSUES)
-    .map((e) => ({ path: `rows.${e.row}${e.field ? `.${e.field}` : ''}`, message: e.message }));
+/** 422 with one issue per row and field (the first 500) when any row needs correcting. */
+function refuseRowProblems(prepared: Prepared): void {
+  if (prepared.errors.length === 0) return;
+  const rows = new Set(prepared.errors.map((e) => e.row)).size;
+  const problems = `${prepared.errors.length} problem${prepared.errors.length === 1 ? '' : 's'}`;
+  throw new UnprocessableError(
+    `${rows} of ${prepared.rowCount} rows need correcting (${problems}); nothing was stored. Fix them and submit again.`,
+    prepared.errors
+      .slice(0, MAX_ISSUES)
+      .map((e) => ({ path: `rows.${e.row}${e.field ? `.${e.field}` : ''}`, message: e.message })),
+  );
 }
 
-async function rememberMapping(db: Kysely<Database>, firmId: string, prepared: Extract<PreparedUpload, { ok: true }>) {
-  if (!prepared.columns) return;
-  const mapping = JSON.stringify(mappingToRemember(prepared.columns.headers, prepared.columns.mapping, prepared.columns.units));
-  await inTenantTransaction(db, { firmId, platformRole: 'user' }, (trx) =>
-    trx
-      .insertInto('field_mapping')
-      .values({ firm_id: firmId, name: 'default', mapping })
-      .onConflict((oc) => oc.columns(['firm_id', 'name']).doUpdateSet({ mapping, updated_at: new Date() }))
-      .execute(),
+/** 422 when required fields have no column and the person sent no mapping of their own. */
+function refuseMissingColumns(prepared: Prepared, upload: UploadRequest): void {
+  const missing = prepared.columns?.missingRequired ?? [];
+  if (missing.length === 0 || upload.options.mapping) return;
+  throw new UnprocessableError(
+    `No column was matched for: ${missing.join(', ')}. Rename the headers as in the template or send a mapping.`,
   );
 }
 
 /**
- * Checks and stores an upload. Any row problem refuses the whole upload (422, one issue per row and
- * field) and stores nothing; a clean upload is stored whole by storeSubmission.
+ * Checks and stores an upload. The same file again is refused first (409); any row problem refuses
+ * the whole upload (422, one issue per row and field) and stores nothing; a clean upload is stored
+ * whole by storeSubmission. `rawRows` are rows that did not come from a file (a partner's JSON).
  */
 export async function submitUpload(
-  db: Kysely<Database>,
+  app: Pick<AppServices, 'db' | 'appUrl'>,
   contributor: Contributor,
   upload: UploadRequest,
   kind: 'csv' | 'ags4' | 'api' | 'seed',
-  appUrl: string,
   rawRows?: RawRow[],
-) {
+): Promise<StoredSubmission> {
+  const { firmId } = contributor;
+  await inTenantTransaction(app.db, firmScope(firmId), (trx) => refuseSameFile(trx, firmId, upload.sha256));
   const prepared = rawRows
-    ? await prepareRawRows(db, contributor.firmId, rawRows)
-    : await prepareUpload(db, contributor.firmId, upload.bytes, upload.options);
-  if (!prepared.ok) throw importFailure(prepared.error);
-  if (prepared.errors.length > 0) {
-    const rows = new Set(prepared.errors.map((e) => e.row)).size;
-    throw new ApiError(
-      'UNPROCESSABLE',
-      `${rows} of ${prepared.rowCount} rows need correcting (${prepared.errors.length} problem${prepared.errors.length === 1 ? '' : 's'}); nothing was stored. Fix them and submit again.`,
-      rowIssues(prepared),
-    );
-  }
-  if (prepared.columns && prepared.columns.missingRequired.length > 0 && !upload.options.mapping) {
-    throw new ApiError(
-      'UNPROCESSABLE',
-      `No column was matched for: ${prepared.columns.missingRequired.join(', ')}. Rename the headers as in the template or send a mapping.`,
-    );
-  }
-  const stored = await storeSubmission(
-    db,
-    contributor,
-    { kind, name: upload.fileName, mediaType: upload.mediaType, bytes: upload.bytes, sha256: upload.sha256 },
-    prepared.records,
-    appUrl,
-  );
-  if (upload.options.remember) await rememberMapping(db, contributor.firmId, prepared);
+    ? await prepareRawRows(app, firmId, rawRows)
+    : await prepareUpload(app, firmId, upload.bytes, upload.options);
+  if (!prepared.ok) throw new ImportFileError(prepared.error);
+  refuseRowProblems(prepared);
+  refuseMissingColumns(prepared, upload);
+  const source = { kind, name: upload.fileName, mediaType: upload.mediaType, bytes: upload.bytes, sha256: upload.sha256 };
+  const stored = await storeSubmission(app, contributor, source, prepared.records);
+  if (upload.options.remember && prepared.columns) await rememberMapping(app, firmId, prepared.columns);
   return stored;
 }

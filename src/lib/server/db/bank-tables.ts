@@ -2,6 +2,8 @@ import type { ColumnType, Generated, GeneratedAlways, Insertable, Selectable, Up
 import type { SampleQualityClass } from '../../import/sample-quality';
 import { TEST_METHODS, type TestMethod } from '../../import/test-method';
 import { USCS_SYMBOLS, type UscsSymbol } from '../../import/uscs';
+import type { ImportFlag, TestRecordStatus } from '../../contracts/records';
+import type { SubmissionSourceKind, SubmissionStatus } from '../../contracts/submissions';
 import { GENESIS_VALUES } from '../../schemas/vocabulary';
 import type { Timestamp } from './schema';
 
@@ -14,13 +16,13 @@ export type Genesis = (typeof GENESES)[number];
 /** ASTM D2487 group symbols, loading methods and sample quality classes: the import core's closed lists. */
 export { type SampleQualityClass, TEST_METHODS, type TestMethod, USCS_SYMBOLS, type UscsSymbol };
 
-export const SUBMISSION_STATUSES = ['draft', 'submitted', 'in_review', 'accepted', 'returned', 'rejected', 'withdrawn'] as const;
-export type SubmissionStatus = (typeof SUBMISSION_STATUSES)[number];
-export const SUBMISSION_SOURCE_KINDS = ['csv', 'ags4', 'api', 'seed'] as const;
-export type SubmissionSourceKind = (typeof SUBMISSION_SOURCE_KINDS)[number];
-
-export const TEST_RECORD_STATUSES = ['pending', 'returned', 'published', 'rejected', 'withdrawn'] as const;
-export type TestRecordStatus = (typeof TEST_RECORD_STATUSES)[number];
+export { TEST_RECORD_STATUSES, type TestRecordStatus } from '../../contracts/records';
+export {
+  SUBMISSION_SOURCE_KINDS,
+  SUBMISSION_STATUSES,
+  type SubmissionSourceKind,
+  type SubmissionStatus,
+} from '../../contracts/submissions';
 export const RECORD_KINDS = ['oedometer', 'field_back_analysis'] as const;
 export type RecordKind = (typeof RECORD_KINDS)[number];
 export const STRESS_RANGES = ['NC', 'OC'] as const;
@@ -142,10 +144,7 @@ export interface TestRecordTable {
   updated_at: Timestamp;
 }
 
-export interface ImportFlag {
-  field: string;
-  reason: string;
-}
+export type { ImportFlag } from '../../contracts/records';
 
 export interface TestRecordStressLevelTable {
   id: Generated<string>;

@@ -7,7 +7,7 @@
 import { availableParallelism } from 'node:os';
 import { Piscina } from 'piscina';
 import type { EstimatePreviewInput } from '../../schemas/estimate-preview';
-import { ApiError } from '../http/api-error';
+import { BusyError, MalformedRequestError, UnprocessableError } from '../errors';
 import type { PreviewTaskOutcome } from './preview-task';
 
 export interface PreviewPoolOptions {
@@ -20,7 +20,7 @@ export interface PreviewPoolOptions {
 }
 
 export interface PreviewPool {
-  /** JSON text of the preview result; throws ApiError 422 (impossible input) or 503 (queue full). */
+  /** JSON text of the preview result; throws UnprocessableError (impossible input) or BusyError (queue full). */
   run(input: EstimatePreviewInput, signal?: AbortSignal): Promise<string>;
   /** Threads, waiting previews and the queue limit, for health and benchmarks. */
   stats(): { threads: number; queued: number; maxQueue: number; completed: number };
@@ -43,14 +43,12 @@ export function createPreviewPool(options: PreviewPoolOptions): PreviewPool {
   const retryAfterSeconds = () => {
     const averageMs = pool.histogram.runTime.average;
     const perThread = Number.isFinite(averageMs) && averageMs > 0 ? ((pool.queueSize + threads) * averageMs) / threads : 1000;
-    return String(Math.min(30, Math.max(1, Math.ceil(perThread / 1000))));
+    return Math.min(30, Math.max(1, Math.ceil(perThread / 1000)));
   };
   const busy = () =>
-    new ApiError(
-      'SERVICE_UNAVAILABLE',
+    new BusyError(
       'Too many estimates are being computed right now. Try again in a few seconds (see Retry-After).',
-      undefined,
-      { 'retry-after': retryAfterSeconds() },
+      retryAfterSeconds(),
     );
 
   return {
@@ -61,12 +59,12 @@ export function createPreviewPool(options: PreviewPoolOptions): PreviewPool {
       } catch (error) {
         if (error instanceof Error && error.message === 'Task queue is at limit') throw busy();
         if (error instanceof Error && error.name === 'AbortError') {
-          throw new ApiError('BAD_REQUEST', 'The preview was cancelled because the request was closed.');
+          throw new MalformedRequestError('The preview was cancelled because the request was closed.');
         }
         throw error;
       }
       if (outcome.ok) return outcome.json;
-      throw new ApiError('UNPROCESSABLE', `The profile cannot be computed: ${outcome.message}`, outcome.issues);
+      throw new UnprocessableError(`The profile cannot be computed: ${outcome.message}`, outcome.issues);
     },
     stats: () => ({ threads, queued: pool.queueSize, maxQueue, completed: pool.completed }),
     close: () => pool.close(),

@@ -14,7 +14,7 @@ function previewPool(): PreviewPool {
   return pool;
 }
 
-/** The preview of a validated request as JSON text, computed in a worker thread (422 and 503 as ApiError). */
+/** The preview of a validated request as JSON text, computed in a worker thread (UnprocessableError, BusyError). */
 export function previewInWorker(input: EstimatePreviewInput, signal?: AbortSignal): Promise<string> {
   return previewPool().run(input, signal);
 }

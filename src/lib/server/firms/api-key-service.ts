@@ -1,67 +1,56 @@
-import { recordAudit } from '../audit/audit-log';
+import type { ApiKeyList, CreatedApiKey } from '../../contracts/firms';
+import type { AppServices } from '../app-services';
 import { rethrowAuthError } from '../auth/auth-errors';
 import { FIRM_KEY_CONFIG } from '../auth/create-auth';
-import { ApiError } from '../http/api-error';
-import type { FirmDeps } from './firm-service';
+import { NotFoundError } from '../errors';
+import { auditFirmAction, readAsCaller } from './firm-audit';
+import type { FirmCaller } from './firm-caller';
+import { findFirmApiKey, listFirmApiKeys } from './firm-repository';
 
-/** The firm's API keys, without their secrets (only the first characters are kept). */
-export async function listApiKeys(deps: FirmDeps, firmId: string) {
-  const keys = await deps.db
-    .selectFrom('apikey')
-    .select(['id', 'name', 'start', 'createdAt', 'lastRequest as lastUsedAt', 'enabled'])
-    .where('configId', '=', FIRM_KEY_CONFIG)
-    .where('referenceId', '=', firmId)
-    .orderBy('createdAt', 'desc')
-    .execute();
-  return keys;
+type FirmApp = Pick<AppServices, 'db' | 'auth'>;
+
+/** The firm's API keys, without their secrets. */
+export async function listApiKeys(app: FirmApp, caller: FirmCaller, firmId: string): Promise<ApiKeyList> {
+  return { keys: await readAsCaller(app, caller, (trx) => listFirmApiKeys(trx, firmId)) };
 }
 
 /** Creates a key that may only contribute to this firm; its secret is returned this once. */
-export async function createApiKey(deps: FirmDeps, firmId: string, name: string) {
+export async function createApiKey(app: FirmApp, caller: FirmCaller, firmId: string, name: string): Promise<CreatedApiKey> {
+  let created: { id: string; name: string | null; start: string | null; createdAt: Date; key: string };
   try {
-    const created = await deps.auth.api.createApiKey({
-      headers: deps.headers,
+    created = await app.auth.api.createApiKey({
+      headers: caller.headers,
       body: { configId: FIRM_KEY_CONFIG, name, organizationId: firmId },
     });
-    await recordAudit(deps.db, {
-      actorUserId: deps.identity.user.id,
-      firmId,
-      action: 'firm.api_key_created',
-      objectType: 'api_key',
-      objectId: created.id,
-      summary: { name, start: created.start },
-      ipAddress: deps.ipAddress,
-    });
-    return {
-      key: { id: created.id, name: created.name, start: created.start, createdAt: created.createdAt },
-      secret: created.key,
-    };
   } catch (error) {
     rethrowAuthError(error);
   }
+  await auditFirmAction(app, caller, {
+    firmId,
+    action: 'firm.api_key_created',
+    objectType: 'api_key',
+    objectId: created.id,
+    summary: { name, start: created.start },
+  });
+  return {
+    key: { id: created.id, name: created.name, start: created.start, createdAt: created.createdAt },
+    secret: created.key,
+  };
 }
 
-export async function revokeApiKey(deps: FirmDeps, firmId: string, keyId: string) {
-  const key = await deps.db
-    .selectFrom('apikey')
-    .select(['id', 'name'])
-    .where('id', '=', keyId)
-    .where('configId', '=', FIRM_KEY_CONFIG)
-    .where('referenceId', '=', firmId)
-    .executeTakeFirst();
-  if (!key) throw new ApiError('NOT_FOUND', 'There is no such API key in your active firm.');
+export async function revokeApiKey(app: FirmApp, caller: FirmCaller, firmId: string, keyId: string): Promise<void> {
+  const key = await readAsCaller(app, caller, (trx) => findFirmApiKey(trx, firmId, keyId));
+  if (!key) throw new NotFoundError('There is no such API key in your active firm.');
   try {
-    await deps.auth.api.deleteApiKey({ headers: deps.headers, body: { keyId, configId: FIRM_KEY_CONFIG } });
+    await app.auth.api.deleteApiKey({ headers: caller.headers, body: { keyId, configId: FIRM_KEY_CONFIG } });
   } catch (error) {
     rethrowAuthError(error);
   }
-  await recordAudit(deps.db, {
-    actorUserId: deps.identity.user.id,
+  await auditFirmAction(app, caller, {
     firmId,
     action: 'firm.api_key_revoked',
     objectType: 'api_key',
     objectId: keyId,
     summary: { name: key.name },
-    ipAddress: deps.ipAddress,
   });
 }

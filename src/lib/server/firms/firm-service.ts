@@ -1,20 +1,13 @@
-import type { Kysely } from 'kysely';
+import type { ChangedMember, CreatedFirm, FirmOverview } from '../../contracts/firms';
 import type { FirmRole } from '../../permissions/roles';
-import { recordAudit } from '../audit/audit-log';
+import type { AppServices } from '../app-services';
 import { rethrowAuthError } from '../auth/auth-errors';
-import type { Auth } from '../auth/create-auth';
-import type { ResolvedIdentity } from '../auth/resolve-actor';
-import type { Database } from '../db/schema';
-import { ApiError } from '../http/api-error';
+import { InvalidStateError, NotFoundError, RefusedError } from '../errors';
+import { auditFirmAction, readAsCaller } from './firm-audit';
+import type { FirmCaller } from './firm-caller';
+import { findFirm, findMemberOfFirm, membersOfFirm, pendingInvitationsOfFirm } from './firm-repository';
 
-export interface FirmDeps {
-  auth: Auth;
-  db: Kysely<Database>;
-  /** the caller's request headers (session cookie), so better-auth checks the same person again */
-  headers: Headers;
-  identity: ResolvedIdentity;
-  ipAddress: string;
-}
+type FirmApp = Pick<AppServices, 'db' | 'auth'>;
 
 function slugify(name: string): string {
   const base = name
@@ -27,126 +20,95 @@ function slugify(name: string): string {
   return `${base || 'firm'}-${Math.random().toString(36).slice(2, 7)}`;
 }
 
-async function audit(
-  deps: FirmDeps,
-  firmId: string,
-  action: string,
-  objectType: string,
-  objectId: string,
-  summary: Record<string, unknown>,
-) {
-  await recordAudit(deps.db, {
-    actorUserId: deps.identity.user.id,
-    firmId,
-    action,
-    objectType,
-    objectId,
-    summary,
-    ipAddress: deps.ipAddress,
-  });
-}
-
 /** Creates a firm with the caller as owner and makes it the active firm. */
-export async function createFirm(deps: FirmDeps, name: string) {
+export async function createFirm(app: FirmApp, caller: FirmCaller, name: string): Promise<CreatedFirm> {
   let firm: { id: string; name: string; slug: string } | null = null;
   try {
-    firm = await deps.auth.api.createOrganization({ headers: deps.headers, body: { name, slug: slugify(name) } });
+    firm = await app.auth.api.createOrganization({ headers: caller.headers, body: { name, slug: slugify(name) } });
   } catch (error) {
     rethrowAuthError(error, { YOU_HAVE_REACHED_THE_MAXIMUM_NUMBER_OF_ORGANIZATIONS: 'You belong to as many firms as allowed.' });
   }
-  if (!firm) throw new ApiError('INTERNAL', 'The firm could not be created.');
-  await audit(deps, firm.id, 'firm.created', 'firm', firm.id, { name });
-  return { id: firm.id, name: firm.name, slug: firm.slug };
+  if (!firm) throw new Error('better-auth created no firm and raised no error');
+  await auditFirmAction(app, caller, {
+    firmId: firm.id,
+    action: 'firm.created',
+    objectType: 'firm',
+    objectId: firm.id,
+    summary: { name },
+  });
+  return { firm: { id: firm.id, name: firm.name, slug: firm.slug } };
 }
 
 /** Members of the active firm; invitations only for those who manage members. */
-export async function describeFirm(deps: FirmDeps, firmId: string, canManage: boolean) {
-  const firm = await deps.db
-    .selectFrom('organization')
-    .select(['id', 'name', 'slug'])
-    .where('id', '=', firmId)
-    .executeTakeFirstOrThrow();
-  const members = await deps.db
-    .selectFrom('member')
-    .innerJoin('user', 'user.id', 'member.userId')
-    .select([
-      'member.id as memberId',
-      'user.id as userId',
-      'user.name',
-      'user.email',
-      'member.role',
-      'member.createdAt as joinedAt',
-    ])
-    .where('member.organizationId', '=', firmId)
-    .orderBy('member.createdAt')
-    .execute();
-  const invitations = canManage
-    ? await deps.db
-        .selectFrom('invitation')
-        .select(['id', 'email', 'role', 'status', 'expiresAt'])
-        .where('organizationId', '=', firmId)
-        .where('status', '=', 'pending')
-        .orderBy('createdAt', 'desc')
-        .execute()
-    : [];
-  return { firm, myRole: deps.identity.actor.firmRole, members, invitations };
+export async function describeFirm(app: FirmApp, caller: FirmCaller, firmId: string, canManage: boolean): Promise<FirmOverview> {
+  return readAsCaller(app, caller, async (trx) => {
+    const firm = await findFirm(trx, firmId);
+    if (!firm) throw new NotFoundError('Your active firm no longer exists. Choose another firm in the header.');
+    const members = await membersOfFirm(trx, firmId);
+    const invitations = canManage ? await pendingInvitationsOfFirm(trx, firmId) : [];
+    return { firm, myRole: caller.identity.actor.firmRole, members, invitations };
+  });
 }
 
 /** A member of the caller's active firm, or 404: an id from another firm is treated as unknown. */
-async function memberOfFirm(deps: FirmDeps, firmId: string, memberId: string) {
-  const member = await deps.db
-    .selectFrom('member')
-    .select(['id', 'userId', 'role'])
-    .where('id', '=', memberId)
-    .where('organizationId', '=', firmId)
-    .executeTakeFirst();
-  if (!member) throw new ApiError('NOT_FOUND', 'There is no such member in your active firm.');
+async function memberOfFirm(app: FirmApp, caller: FirmCaller, firmId: string, memberId: string) {
+  const member = await readAsCaller(app, caller, (trx) => findMemberOfFirm(trx, firmId, memberId));
+  if (!member) throw new NotFoundError('There is no such member in your active firm.');
   return member;
 }
 
-export async function changeMemberRole(deps: FirmDeps, firmId: string, memberId: string, role: FirmRole) {
-  const member = await memberOfFirm(deps, firmId, memberId);
-  if (member.role === 'owner') throw new ApiError('FORBIDDEN', "The firm owner's role cannot be changed.");
-  if (member.userId === deps.identity.user.id)
-    throw new ApiError('FORBIDDEN', 'You cannot change your own role; ask another owner or admin.');
+export async function changeMemberRole(
+  app: FirmApp,
+  caller: FirmCaller,
+  firmId: string,
+  memberId: string,
+  role: FirmRole,
+): Promise<ChangedMember> {
+  const member = await memberOfFirm(app, caller, firmId, memberId);
+  if (member.role === 'owner') throw new RefusedError("The firm owner's role cannot be changed.");
+  if (member.userId === caller.identity.user.id)
+    throw new RefusedError('You cannot change your own role; ask another owner or admin.');
   try {
-    await deps.auth.api.updateMemberRole({ headers: deps.headers, body: { memberId, role, organizationId: firmId } });
+    await app.auth.api.updateMemberRole({ headers: caller.headers, body: { memberId, role, organizationId: firmId } });
   } catch (error) {
     rethrowAuthError(error);
   }
-  await audit(deps, firmId, 'firm.member_role_changed', 'member', memberId, { before: member.role, after: role });
-  return { memberId, userId: member.userId, role };
+  await auditFirmAction(app, caller, {
+    firmId,
+    action: 'firm.member_role_changed',
+    objectType: 'member',
+    objectId: memberId,
+    summary: { before: member.role, after: role },
+  });
+  return { member: { memberId, userId: member.userId, role } };
 }
 
-export async function removeMember(deps: FirmDeps, firmId: string, memberId: string) {
-  const member = await memberOfFirm(deps, firmId, memberId);
-  if (member.role === 'owner') throw new ApiError('FORBIDDEN', 'The firm owner cannot be removed.');
-  if (member.userId === deps.identity.user.id) throw new ApiError('FORBIDDEN', 'Use "Leave firm" to remove yourself.');
+export async function removeMember(app: FirmApp, caller: FirmCaller, firmId: string, memberId: string): Promise<void> {
+  const member = await memberOfFirm(app, caller, firmId, memberId);
+  if (member.role === 'owner') throw new RefusedError('The firm owner cannot be removed.');
+  if (member.userId === caller.identity.user.id) throw new RefusedError('Use "Leave firm" to remove yourself.');
   try {
-    await deps.auth.api.removeMember({ headers: deps.headers, body: { memberIdOrEmail: memberId, organizationId: firmId } });
+    await app.auth.api.removeMember({ headers: caller.headers, body: { memberIdOrEmail: memberId, organizationId: firmId } });
   } catch (error) {
     rethrowAuthError(error);
   }
-  await audit(deps, firmId, 'firm.member_removed', 'member', memberId, { before: { userId: member.userId, role: member.role } });
+  await auditFirmAction(app, caller, {
+    firmId,
+    action: 'firm.member_removed',
+    objectType: 'member',
+    objectId: memberId,
+    summary: { before: { userId: member.userId, role: member.role } },
+  });
 }
 
-export async function leaveFirm(deps: FirmDeps, firmId: string) {
-  if (deps.identity.actor.firmRole === 'owner') {
-    throw new ApiError('CONFLICT', 'The owner cannot leave the firm. Ask the platform admin to transfer ownership first.');
+export async function leaveFirm(app: FirmApp, caller: FirmCaller, firmId: string): Promise<void> {
+  if (caller.identity.actor.firmRole === 'owner') {
+    throw new InvalidStateError('The owner cannot leave the firm. Ask the platform admin to transfer ownership first.');
   }
   try {
-    await deps.auth.api.leaveOrganization({ headers: deps.headers, body: { organizationId: firmId } });
+    await app.auth.api.leaveOrganization({ headers: caller.headers, body: { organizationId: firmId } });
   } catch (error) {
     rethrowAuthError(error);
   }
-  await audit(deps, firmId, 'firm.member_left', 'firm', firmId, {});
-}
-
-/** The dependencies a firm operation needs, from an endpoint's context. */
-export function firmDepsFrom(
-  context: { request: Request; clientAddress: string },
-  identity: ResolvedIdentity,
-  services: { auth: Auth; db: Kysely<Database> },
-): FirmDeps {
-  return { ...services, headers: context.request.headers, identity, ipAddress: context.clientAddress };
+  await auditFirmAction(app, caller, { firmId, action: 'firm.member_left', objectType: 'firm', objectId: firmId, summary: {} });
 }

@@ -1,7 +1,13 @@
-import { recordAudit } from '../audit/audit-log';
+import type { InvitationForRecipient, JoinedFirm, SentInvitation } from '../../contracts/firms';
+import { type FirmRole, isFirmRole } from '../../permissions/roles';
+import type { AppServices } from '../app-services';
 import { rethrowAuthError } from '../auth/auth-errors';
-import { ApiError } from '../http/api-error';
-import type { FirmDeps } from './firm-service';
+import { InvalidStateError, NotFoundError } from '../errors';
+import { auditFirmAction, readAsCaller } from './firm-audit';
+import type { FirmCaller } from './firm-caller';
+import { findInvitationOfFirm, findInvitationWithFirm } from './firm-repository';
+
+type FirmApp = Pick<AppServices, 'db' | 'auth'>;
 
 const INVITE_MESSAGES = {
   USER_IS_ALREADY_A_MEMBER_OF_THIS_ORGANIZATION: 'That person is already a member of your firm.',
@@ -9,106 +15,93 @@ const INVITE_MESSAGES = {
   INVITATION_LIMIT_REACHED: 'Your firm has reached its limit of pending invitations.',
 };
 
-export async function inviteMember(deps: FirmDeps, firmId: string, email: string, role: string) {
+export async function inviteMember(
+  app: FirmApp,
+  caller: FirmCaller,
+  firmId: string,
+  email: string,
+  role: Exclude<FirmRole, 'owner'>,
+): Promise<SentInvitation> {
+  let invitation: { id: string; email: string; role: string; status: string; expiresAt: Date };
   try {
-    const invitation = await deps.auth.api.createInvitation({
-      headers: deps.headers,
-      body: { email, role: role as 'engineer', organizationId: firmId },
-    });
-    await recordAudit(deps.db, {
-      actorUserId: deps.identity.user.id,
-      firmId,
-      action: 'firm.invitation_sent',
-      objectType: 'invitation',
-      objectId: invitation.id,
-      summary: { email, role },
-      ipAddress: deps.ipAddress,
-    });
-    return {
-      id: invitation.id,
-      email: invitation.email,
-      role: invitation.role,
-      status: invitation.status,
-      expiresAt: invitation.expiresAt,
-    };
+    invitation = await app.auth.api.createInvitation({ headers: caller.headers, body: { email, role, organizationId: firmId } });
   } catch (error) {
     rethrowAuthError(error, INVITE_MESSAGES);
   }
+  await auditFirmAction(app, caller, {
+    firmId,
+    action: 'firm.invitation_sent',
+    objectType: 'invitation',
+    objectId: invitation.id,
+    summary: { email, role },
+  });
+  const { id, status, expiresAt } = invitation;
+  return { invitation: { id, email: invitation.email, role, status, expiresAt } };
 }
 
-export async function cancelInvitation(deps: FirmDeps, firmId: string, invitationId: string) {
-  const invitation = await deps.db
-    .selectFrom('invitation')
-    .select(['id', 'status'])
-    .where('id', '=', invitationId)
-    .where('organizationId', '=', firmId)
-    .executeTakeFirst();
-  if (!invitation) throw new ApiError('NOT_FOUND', 'There is no such invitation in your active firm.');
+export async function cancelInvitation(app: FirmApp, caller: FirmCaller, firmId: string, invitationId: string): Promise<void> {
+  const invitation = await readAsCaller(app, caller, (trx) => findInvitationOfFirm(trx, firmId, invitationId));
+  if (!invitation) throw new NotFoundError('There is no such invitation in your active firm.');
   try {
-    await deps.auth.api.cancelInvitation({ headers: deps.headers, body: { invitationId } });
+    await app.auth.api.cancelInvitation({ headers: caller.headers, body: { invitationId } });
   } catch (error) {
     rethrowAuthError(error);
   }
-  await recordAudit(deps.db, {
-    actorUserId: deps.identity.user.id,
+  await auditFirmAction(app, caller, {
     firmId,
     action: 'firm.invitation_cancelled',
     objectType: 'invitation',
     objectId: invitationId,
-    ipAddress: deps.ipAddress,
   });
 }
 
 /** An invitation addressed to the signed-in person (404 for anyone else, so ids reveal nothing). */
-export async function invitationForRecipient(deps: FirmDeps, invitationId: string) {
-  const row = await deps.db
-    .selectFrom('invitation')
-    .innerJoin('organization', 'organization.id', 'invitation.organizationId')
-    .select([
-      'invitation.id',
-      'invitation.email',
-      'invitation.role',
-      'invitation.status',
-      'invitation.expiresAt',
-      'organization.name as firmName',
-      'organization.id as firmId',
-    ])
-    .where('invitation.id', '=', invitationId)
-    .executeTakeFirst();
-  if (!row || row.email.toLowerCase() !== deps.identity.user.email.toLowerCase()) {
-    throw new ApiError(
-      'NOT_FOUND',
-      'This invitation is not for the address you are signed in with. Sign in with the invited address.',
-    );
+async function invitationFor(app: FirmApp, caller: FirmCaller, invitationId: string) {
+  const row = await readAsCaller(app, caller, (trx) => findInvitationWithFirm(trx, invitationId));
+  if (!row || row.email.toLowerCase() !== caller.identity.user.email.toLowerCase() || !isFirmRole(row.role)) {
+    throw new NotFoundError('This invitation is not for the address you are signed in with. Sign in with the invited address.');
   }
-  return row;
+  return { ...row, role: row.role };
 }
 
-export async function respondToInvitation(deps: FirmDeps, invitationId: string, accept: boolean) {
-  const invitation = await invitationForRecipient(deps, invitationId);
-  if (invitation.status !== 'pending') throw new ApiError('CONFLICT', `This invitation is already ${invitation.status}.`);
+/** What the invited person sees of an invitation (not the firm's id). */
+export async function invitationForRecipient(
+  app: FirmApp,
+  caller: FirmCaller,
+  invitationId: string,
+): Promise<InvitationForRecipient> {
+  const { firmId: _firmId, ...invitation } = await invitationFor(app, caller, invitationId);
+  return { invitation };
+}
+
+export async function respondToInvitation(
+  app: FirmApp,
+  caller: FirmCaller,
+  invitationId: string,
+  accept: boolean,
+): Promise<JoinedFirm | null> {
+  const invitation = await invitationFor(app, caller, invitationId);
+  if (invitation.status !== 'pending') throw new InvalidStateError(`This invitation is already ${invitation.status}.`);
   if (new Date(invitation.expiresAt) < new Date())
-    throw new ApiError('CONFLICT', 'This invitation has expired. Ask the firm to send a new one.');
+    throw new InvalidStateError('This invitation has expired. Ask the firm to send a new one.');
   try {
     if (accept) {
-      await deps.auth.api.acceptInvitation({ headers: deps.headers, body: { invitationId } });
-      await deps.auth.api.setActiveOrganization({ headers: deps.headers, body: { organizationId: invitation.firmId } });
+      await app.auth.api.acceptInvitation({ headers: caller.headers, body: { invitationId } });
+      await app.auth.api.setActiveOrganization({ headers: caller.headers, body: { organizationId: invitation.firmId } });
     } else {
-      await deps.auth.api.rejectInvitation({ headers: deps.headers, body: { invitationId } });
+      await app.auth.api.rejectInvitation({ headers: caller.headers, body: { invitationId } });
     }
   } catch (error) {
     rethrowAuthError(error, {
       EMAIL_VERIFICATION_REQUIRED_BEFORE_ACCEPTING_OR_REJECTING_INVITATION: 'Confirm your e-mail address first.',
     });
   }
-  await recordAudit(deps.db, {
-    actorUserId: deps.identity.user.id,
+  await auditFirmAction(app, caller, {
     firmId: invitation.firmId,
     action: accept ? 'firm.invitation_accepted' : 'firm.invitation_rejected',
     objectType: 'invitation',
     objectId: invitationId,
     summary: { role: invitation.role },
-    ipAddress: deps.ipAddress,
   });
-  return { id: invitation.firmId, name: invitation.firmName };
+  return accept ? { firm: { id: invitation.firmId, name: invitation.firmName } } : null;
 }

@@ -1,6 +1,6 @@
 import { sql } from 'kysely';
 import { Meilisearch } from 'meilisearch';
-import { appContext } from '../app-context';
+import type { AppServices } from '../app-services';
 import { config } from '../config';
 
 export type ServiceState = 'up' | 'down' | 'not configured';
@@ -34,12 +34,12 @@ function failure(error: unknown): ServiceHealth {
   return { status: 'down', detail: error instanceof Error ? error.message.split('\n')[0] : 'unreachable' };
 }
 
-async function checkDatabase(): Promise<HealthReport['database']> {
+async function checkDatabase(app: Pick<AppServices, 'db'>): Promise<HealthReport['database']> {
   if (!config.databaseUrl) return { status: 'not configured', detail: 'DATABASE_URL is not set' };
   try {
     const { value, latencyMs } = await timed(async () => {
       const { rows } = await sql<{ name: string | null }>`
-        select max(name) as name from kysely_migration`.execute(appContext().database.db);
+        select max(name) as name from kysely_migration`.execute(app.db);
       return rows[0]?.name ?? null;
     });
     return { status: 'up', latencyMs, schemaVersion: value };
@@ -50,9 +50,9 @@ async function checkDatabase(): Promise<HealthReport['database']> {
   }
 }
 
-async function checkMail(): Promise<ServiceHealth> {
+async function checkMail(app: Pick<AppServices, 'mailer'>): Promise<ServiceHealth> {
   try {
-    const { latencyMs } = await timed(() => appContext().mailer.verify());
+    const { latencyMs } = await timed(() => app.mailer.verify());
     return { status: 'up', latencyMs };
   } catch (error) {
     return failure(error);
@@ -71,8 +71,8 @@ async function checkSearch(): Promise<ServiceHealth> {
 }
 
 /** Database, mail and search status; the app is down when the database is. */
-export async function checkHealth(): Promise<HealthReport> {
-  const [database, mail, search] = await Promise.all([checkDatabase(), checkMail(), checkSearch()]);
+export async function checkHealth(app: Pick<AppServices, 'db' | 'mailer'>): Promise<HealthReport> {
+  const [database, mail, search] = await Promise.all([checkDatabase(app), checkMail(app), checkSearch()]);
   const degraded = mail.status === 'down' || search.status === 'down';
   const status = database.status !== 'up' ? 'down' : degraded ? 'degraded' : 'ok';
   return { status, checkedAt: new Date().toISOString(), database, mail, search };

@@ -1,33 +1,11 @@
-/** The closed list of error codes every API response uses, with their HTTP status. */
-export const ERROR_STATUS = {
-  BAD_REQUEST: 400,
-  VALIDATION_FAILED: 400,
-  UNAUTHENTICATED: 401,
-  FORBIDDEN: 403,
-  NOT_FOUND: 404,
-  METHOD_NOT_ALLOWED: 405,
-  CONFLICT: 409,
-  PAYLOAD_TOO_LARGE: 413,
-  UNSUPPORTED_MEDIA_TYPE: 415,
-  UNPROCESSABLE: 422,
-  RATE_LIMITED: 429,
-  INTERNAL: 500,
-  SERVICE_UNAVAILABLE: 503,
-} as const;
+import { ERROR_STATUS, type ErrorCode, type FieldIssue } from '../../contracts/errors';
 
-export type ErrorCode = keyof typeof ERROR_STATUS;
+export { ERROR_STATUS, type ErrorBody, type ErrorCode, type FieldIssue } from '../../contracts/errors';
 
-/** One problem with one field of the input; `path` is dotted (`layers.0.cc`), empty for the whole body. */
-export interface FieldIssue {
-  path: string;
-  message: string;
-}
-
-export interface ErrorBody {
-  error: { code: ErrorCode; message: string; issues?: FieldIssue[] };
-}
-
-/** Thrown by services and endpoints; turned into the one error shape by `handleApi`. */
+/**
+ * An HTTP answer decided at the edge (guards, body and upload readers, rate limits). Services never
+ * throw it: they throw the domain errors of `../errors.ts`, which `error-mapper.ts` turns into codes.
+ */
 export class ApiError extends Error {
   constructor(
     readonly code: ErrorCode,

@@ -1,6 +1,5 @@
 import type { APIContext } from 'astro';
 import { type Action, hasPermission, type Resource } from '../../permissions/roles';
-import { appContext } from '../app-context';
 import { recordAudit } from '../audit/audit-log';
 import type { ResolvedIdentity } from '../auth/resolve-actor';
 import { ApiError } from './api-error';
@@ -16,7 +15,7 @@ export function requireIdentity(context: Context): ResolvedIdentity {
 
 /** Records a refused request in the audit log. */
 export async function auditRefusal(context: Context, identity: ResolvedIdentity, reason: Record<string, unknown>): Promise<void> {
-  await recordAudit(appContext().database.db, {
+  await recordAudit(context.locals.app.db, {
     actorUserId: identity.user.id,
     firmId: identity.actor.firmId,
     action: 'permission.refused',

@@ -1,5 +1,4 @@
 import type { APIContext } from 'astro';
-import { appContext } from '../app-context';
 import type { RateLimitRule } from '../auth/rate-limit';
 import { ApiError } from './api-error';
 
@@ -18,11 +17,11 @@ export const AUTH_LIMITS = {
  * (e.g. an e-mail address) when given.
  */
 export async function enforceRateLimit(
-  context: Pick<APIContext, 'clientAddress'>,
+  context: Pick<APIContext, 'clientAddress' | 'locals'>,
   name: keyof typeof AUTH_LIMITS,
   subject: string = context.clientAddress,
 ): Promise<void> {
-  const decision = await appContext().rateLimiter.consume(`${name}:${subject}`, AUTH_LIMITS[name]);
+  const decision = await context.locals.app.rateLimiter.consume(`${name}:${subject}`, AUTH_LIMITS[name]);
   if (!decision.allowed) {
     const seconds = String(decision.retryAfter ?? AUTH_LIMITS[name].window);
     throw new ApiError('RATE_LIMITED', `Too many attempts. Wait ${seconds} s and try again.`, undefined, {

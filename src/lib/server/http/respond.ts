@@ -1,6 +1,8 @@
 import type { APIContext, APIRoute } from 'astro';
 import type { z } from 'zod';
+import type { AppServices } from '../app-services';
 import { ApiError, ERROR_STATUS, type ErrorBody, type ErrorCode, type FieldIssue } from './api-error';
+import { toHttpError } from './error-mapper';
 
 const NO_STORE = { 'cache-control': 'no-store' };
 
@@ -31,16 +33,21 @@ export function issuesFromZod(error: z.ZodError): FieldIssue[] {
   return error.issues.map((issue) => ({ path: issue.path.map(String).join('.'), message: issue.message }));
 }
 
+/** An endpoint's body: the request context and the process-wide services (`context.locals.app`). */
+export type ApiHandler = (context: APIContext, app: AppServices) => Promise<Response> | Response;
+
 /**
- * Wraps an endpoint so every failure leaves in the one error shape: ApiError with its own code,
- * anything unexpected as a 500 that names no internals (the detail goes to the server log).
+ * Wraps an endpoint so every failure leaves in the one error shape: edge and domain errors with the
+ * code `toHttpError` gives them, anything unexpected as a 500 that names no internals (the detail
+ * goes to the server log).
  */
-export function handleApi(handler: (context: APIContext) => Promise<Response> | Response): APIRoute {
+export function handleApi(handler: ApiHandler): APIRoute {
   return async (context) => {
     try {
-      return await handler(context);
+      return await handler(context, context.locals.app);
     } catch (error) {
-      if (error instanceof ApiError) return errorResponse(error.code, error.message, error.issues, error.headers);
+      const known = toHttpError(error);
+      if (known) return errorResponse(known.code, known.message, known.issues, known.headers);
       console.error(`[api] ${context.request.method} ${context.url.pathname} failed:`, error);
       return errorResponse(
         'INTERNAL',
@@ -48,6 +55,19 @@ export function handleApi(handler: (context: APIContext) => Promise<Response> | 
       );
     }
   };
+}
+
+/** A body that fits the schema, or ApiError (400) with one issue per field. */
+function validBody<T extends z.ZodType>(schema: T, raw: unknown): z.infer<T> {
+  const parsed = schema.safeParse(raw);
+  if (!parsed.success) {
+    throw new ApiError(
+      'VALIDATION_FAILED',
+      'Some fields are missing or invalid; see issues for each field.',
+      issuesFromZod(parsed.error),
+    );
+  }
+  return parsed.data;
 }
 
 /** Reads a JSON body and validates it; throws ApiError (400) with per-field issues when it does not fit. */
@@ -62,15 +82,26 @@ export async function readJsonBody<T extends z.ZodType>(request: Request, schema
   } catch {
     throw new ApiError('BAD_REQUEST', 'The request body is not valid JSON. Check for a missing comma, quote or bracket.');
   }
-  const parsed = schema.safeParse(raw);
-  if (!parsed.success) {
-    throw new ApiError(
-      'VALIDATION_FAILED',
-      'Some fields are missing or invalid; see issues for each field.',
-      issuesFromZod(parsed.error),
-    );
+  return validBody(schema, raw);
+}
+
+/**
+ * Reads a form post (urlencoded or multipart, text fields only) and validates it like a JSON body;
+ * throws ApiError (400) with per-field issues when it does not fit.
+ */
+export async function readFormBody<T extends z.ZodType>(request: Request, schema: T): Promise<z.infer<T>> {
+  let form: FormData;
+  try {
+    form = await request.formData();
+  } catch {
+    throw new ApiError('BAD_REQUEST', 'The form could not be read. Send it as application/x-www-form-urlencoded.');
   }
-  return parsed.data;
+  const fields: Record<string, string> = {};
+  for (const [name, value] of form) {
+    if (typeof value !== 'string') throw new ApiError('BAD_REQUEST', `The form field "${name}" must be text, not a file.`);
+    fields[name] = value;
+  }
+  return validBody(schema, fields);
 }
 
 /** Validates a URL's query string; throws ApiError (400) with per-parameter issues. */

@@ -1,19 +1,80 @@
-import type { Kysely } from 'kysely';
-import type { ReviewDecision } from '../../schemas/review';
-import { recordAudit } from '../audit/audit-log';
+import type { Transaction } from 'kysely';
+import type { DecisionResult, ReviewDecision } from '../../contracts/review';
+import type { AppServices } from '../app-services';
+import type { ActingPerson } from '../audit/acting-person';
+import { insertAuditEntry } from '../audit/audit-repository';
 import { contributorDecisionMail } from '../contribute/notifications';
 import type { Database } from '../db/schema';
-import { ApiError } from '../http/api-error';
+import { InvalidInputError, InvalidStateError, NotFoundError } from '../errors';
 import { enqueueMail } from '../mail/outbox';
+import { insertBankVersion, queueSearchUpserts } from '../records/publication-repository';
+import { pendingRecordsOf } from '../records/record-repository';
+import { returnRecordsWithComments, setRecordStatuses } from '../records/record-store-repository';
+import { lockSubmission } from '../submissions/submission-repository';
+import { transitionSubmission } from '../submissions/transition';
+import { STEWARD_SCOPE } from '../tenancy/scope';
 import { inTenantTransaction } from '../tenancy/tenant-transaction';
-import { STEWARD_SCOPE } from './review-queue';
 
-export interface Steward {
-  userId: string;
-  ipAddress: string | null;
-}
+export type Steward = ActingPerson & { userId: string };
 
 const DECIDED = { accept: 'accepted', return: 'returned', reject: 'rejected' } as const;
+
+type PendingRecord = Awaited<ReturnType<typeof pendingRecordsOf>>[number];
+
+/** The submission, locked, if a steward may decide it now. */
+async function decidableSubmission(trx: Transaction<Database>, submissionId: string) {
+  const submission = await lockSubmission(trx, submissionId);
+  if (!submission || submission.status === 'draft') throw new NotFoundError('There is no such submission waiting for review.');
+  if (submission.status !== 'submitted' && submission.status !== 'in_review') {
+    throw new InvalidStateError(`This submission is ${submission.status}; only submitted ones can be decided.`);
+  }
+  return submission;
+}
+
+/** 400 when a record comment names a record that is not pending in this submission. */
+function checkRecordComments(decision: ReviewDecision, pending: ReadonlyMap<string, number | null>) {
+  const comments = decision.recordComments ?? [];
+  const unknown = comments.flatMap((c, index) => (pending.has(c.recordId) ? [] : [index]));
+  if (unknown.length === 0) return comments;
+  throw new InvalidInputError(
+    'Some comments name records that are not pending in this submission.',
+    unknown.map((index) => ({ path: `recordComments.${index}.recordId`, message: 'Not a pending record of this submission.' })),
+  );
+}
+
+/** Publishes every pending record in a new bank version and queues them for the search index. */
+async function publish(trx: Transaction<Database>, steward: Steward, submissionId: string, records: readonly PendingRecord[]) {
+  const bankVersion = await insertBankVersion(trx, {
+    publishedBy: steward.userId,
+    note: `Submission ${submissionId}`,
+    recordCount: records.length,
+  });
+  await setRecordStatuses(trx, submissionId, ['pending'], 'published', bankVersion);
+  await queueSearchUpserts(
+    trx,
+    records.map((r) => r.id),
+  );
+  return bankVersion;
+}
+
+/** The platform-wide audit entry of a new bank version (no firm's). */
+async function auditPublication(
+  trx: Transaction<Database>,
+  steward: Steward,
+  bankVersion: number,
+  submissionId: string,
+  records: number,
+) {
+  await insertAuditEntry(trx, {
+    actorUserId: steward.userId,
+    firmId: null,
+    action: 'bank.version_published',
+    objectType: 'bank_version',
+    objectId: String(bankVersion),
+    summary: { submissionId, records },
+    ipAddress: steward.ipAddress,
+  });
+}
 
 /**
  * Applies a steward's decision in one transaction. Accept publishes every pending record in a new
@@ -21,149 +82,46 @@ const DECIDED = { accept: 'accepted', return: 'returned', reject: 'rejected' } a
  * comments, marking commented records returned; reject closes it. The contributor gets one mail.
  */
 export async function decideSubmission(
-  db: Kysely<Database>,
+  app: Pick<AppServices, 'db' | 'appUrl'>,
   steward: Steward,
   submissionId: string,
   decision: ReviewDecision,
-  appUrl: string,
-) {
-  return inTenantTransaction(db, STEWARD_SCOPE, async (trx) => {
-    const submission = await trx
-      .selectFrom('submission')
-      .select(['id', 'status', 'firm_id', 'submitted_by', 'row_count'])
-      .where('id', '=', submissionId)
-      .forUpdate()
-      .executeTakeFirst();
-    if (!submission || submission.status === 'draft')
-      throw new ApiError('NOT_FOUND', 'There is no such submission waiting for review.');
-    if (submission.status !== 'submitted' && submission.status !== 'in_review') {
-      throw new ApiError('CONFLICT', `This submission is ${submission.status}; only submitted ones can be decided.`);
-    }
+): Promise<DecisionResult> {
+  return inTenantTransaction(app.db, STEWARD_SCOPE, async (trx) => {
+    const submission = await decidableSubmission(trx, submissionId);
+    const records = await pendingRecordsOf(trx, submissionId);
+    const rowOf = new Map(records.map((r) => [r.id, r.rowNumber]));
+    const recordComments = checkRecordComments(decision, rowOf);
     const toStatus = DECIDED[decision.action];
-    const records = await trx
-      .selectFrom('test_record')
-      .select(['id', 'row_number'])
-      .where('submission_id', '=', submissionId)
-      .where('status', '=', 'pending')
-      .execute();
-    const known = new Map(records.map((r) => [r.id, r.row_number]));
-    const recordComments = decision.recordComments ?? [];
-    const unknown = recordComments.filter((c) => !known.has(c.recordId));
-    if (unknown.length) {
-      throw new ApiError(
-        'VALIDATION_FAILED',
-        'Some comments name records that are not pending in this submission.',
-        unknown.map((c) => ({
-          path: `recordComments.${recordComments.indexOf(c)}.recordId`,
-          message: 'Not a pending record of this submission.',
-        })),
-      );
-    }
-
     let bankVersion: number | null = null;
-    const now = new Date();
-    if (decision.action === 'accept') {
-      const version = await trx
-        .insertInto('bank_version')
-        .values({ published_by: steward.userId, note: `Submission ${submissionId}`, record_count: records.length })
-        .returning('id')
-        .executeTakeFirstOrThrow();
-      bankVersion = version.id;
-      await trx
-        .updateTable('test_record')
-        .set({ status: 'published', bank_version_id: bankVersion, updated_at: now })
-        .where('submission_id', '=', submissionId)
-        .where('status', '=', 'pending')
-        .execute();
-      if (records.length) {
-        await trx
-          .insertInto('search_outbox')
-          .values(records.map((r) => ({ entity_type: 'test_record', entity_id: r.id, operation: 'upsert' as const })))
-          .execute();
-      }
-    } else if (decision.action === 'return') {
-      for (const c of recordComments) {
-        await trx
-          .updateTable('test_record')
-          .set({ status: 'returned', review_comment: c.comment, updated_at: now })
-          .where('id', '=', c.recordId)
-          .execute();
-      }
-    } else {
-      await trx
-        .updateTable('test_record')
-        .set({ status: 'rejected', updated_at: now })
-        .where('submission_id', '=', submissionId)
-        .where('status', 'in', ['pending', 'returned'])
-        .execute();
-    }
-
-    await trx
-      .updateTable('submission')
-      .set({
-        status: toStatus,
-        steward_comment: decision.comment ?? null,
-        decided_at: now,
-        decided_by: steward.userId,
-        updated_at: now,
-      })
-      .where('id', '=', submissionId)
-      .execute();
-    await trx
-      .insertInto('submission_event')
-      .values({
-        submission_id: submissionId,
-        actor_user_id: steward.userId,
-        from_status: submission.status,
-        to_status: toStatus,
-        comment: decision.comment ?? null,
-      })
-      .execute();
-    await recordAudit(trx, {
-      actorUserId: steward.userId,
-      firmId: submission.firm_id,
+    if (decision.action === 'accept') bankVersion = await publish(trx, steward, submissionId, records);
+    if (decision.action === 'return') await returnRecordsWithComments(trx, recordComments);
+    if (decision.action === 'reject') await setRecordStatuses(trx, submissionId, ['pending', 'returned'], 'rejected');
+    const published = decision.action === 'accept' ? records.length : 0;
+    const comment = decision.comment ?? null;
+    await transitionSubmission(trx, {
+      submissionId,
+      firmId: submission.firmId,
+      from: submission.status,
+      to: toStatus,
+      actor: steward,
+      comment,
       action: `submission.${toStatus}`,
-      objectType: 'submission',
-      objectId: submissionId,
-      summary: {
-        before: submission.status,
-        after: toStatus,
-        comment: decision.comment ?? null,
-        recordComments: recordComments.length,
-        bankVersion,
-        published: decision.action === 'accept' ? records.length : 0,
-      },
-      ipAddress: steward.ipAddress,
+      set: { steward_comment: comment, decided_at: new Date(), decided_by: steward.userId },
+      summary: { comment, recordComments: recordComments.length, bankVersion, published },
     });
-    if (bankVersion !== null) {
-      await recordAudit(trx, {
-        actorUserId: steward.userId,
-        firmId: null,
-        action: 'bank.version_published',
-        objectType: 'bank_version',
-        objectId: String(bankVersion),
-        summary: { submissionId, records: records.length },
-        ipAddress: steward.ipAddress,
-      });
-    }
-    await enqueueMail(
-      trx,
-      await contributorDecisionMail(trx, submission.submitted_by, {
-        submissionId,
-        decision: toStatus,
-        comment: decision.comment ?? null,
-        recordComments: recordComments.map((c) => ({ rowNumber: known.get(c.recordId) ?? null, comment: c.comment })),
-        rowCount: submission.row_count,
-        bankVersion,
-        appUrl,
-      }),
-    );
-    return {
-      id: submissionId,
-      status: toStatus,
+    if (bankVersion !== null) await auditPublication(trx, steward, bankVersion, submissionId, records.length);
+    const mail = await contributorDecisionMail(trx, submission.submittedBy, {
+      submissionId,
+      decision: toStatus,
+      comment,
+      recordComments: recordComments.map((c) => ({ rowNumber: rowOf.get(c.recordId) ?? null, comment: c.comment })),
+      rowCount: submission.rowCount,
       bankVersion,
-      published: decision.action === 'accept' ? records.length : 0,
-      returnedRecords: decision.action === 'return' ? recordComments.length : 0,
-    };
+      appUrl: app.appUrl,
+    });
+    await enqueueMail(trx, mail);
+    const returnedRecords = decision.action === 'return' ? recordComments.length : 0;
+    return { submission: { id: submissionId, status: toStatus, bankVersion, published, returnedRecords } };
   });
 }

@@ -1,21 +1,21 @@
-import { saveEstimateSchema } from '../../../lib/schemas/estimate';
-import { appContext } from '../../../lib/server/app-context';
-import { listEstimates, saveEstimate } from '../../../lib/server/bank/estimate-service';
+import { saveEstimateSchema } from '../../../lib/contracts/estimates';
+import { listEstimates, saveEstimate } from '../../../lib/server/estimates/estimate-service';
+import { actingPerson } from '../../../lib/server/http/acting';
 import { activeFirmId, requirePermission } from '../../../lib/server/http/guards';
 import { handleApi, json, readJsonBody } from '../../../lib/server/http/respond';
 
 export const prerender = false;
 
 /** The active firm's saved estimates. */
-export const GET = handleApi(async (context) => {
+export const GET = handleApi(async (context, app) => {
   const identity = await requirePermission(context, 'estimate', 'read');
-  return json({ estimates: await listEstimates(appContext().database.db, identity, activeFirmId(identity)) });
+  return json(await listEstimates(app, activeFirmId(identity)));
 });
 
 /** Saves an estimate for the active firm. */
-export const POST = handleApi(async (context) => {
+export const POST = handleApi(async (context, app) => {
   const identity = await requirePermission(context, 'estimate', 'create');
   const body = await readJsonBody(context.request, saveEstimateSchema);
-  const estimate = await saveEstimate(appContext().database.db, identity, activeFirmId(identity), body, context.clientAddress);
-  return json({ estimate }, 201);
+  const person = { ...actingPerson(context, identity), firmId: activeFirmId(identity) };
+  return json(await saveEstimate(app, person, body), 201);
 });

@@ -1,4 +1,4 @@
-import { estimatePreviewSchema } from '../../../lib/schemas/estimate-preview';
+import { estimatePreviewSchema } from '../../../lib/contracts/estimates';
 import { previewInWorker } from '../../../lib/server/estimates/preview-service';
 import { requirePermission } from '../../../lib/server/http/guards';
 import { handleApi, jsonText, readJsonBody } from '../../../lib/server/http/respond';

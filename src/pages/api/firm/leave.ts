@@ -1,14 +1,13 @@
-import { appContext } from '../../../lib/server/app-context';
-import { firmDepsFrom, leaveFirm } from '../../../lib/server/firms/firm-service';
+import { leaveFirm } from '../../../lib/server/firms/firm-service';
+import { firmCallerOf } from '../../../lib/server/http/acting';
 import { activeFirmId, requireIdentity } from '../../../lib/server/http/guards';
 import { handleApi } from '../../../lib/server/http/respond';
 
 export const prerender = false;
 
 /** Leaves the active firm. */
-export const POST = handleApi(async (context) => {
+export const POST = handleApi(async (context, app) => {
   const identity = requireIdentity(context);
-  const { auth, database } = appContext();
-  await leaveFirm(firmDepsFrom(context, identity, { auth, db: database.db }), activeFirmId(identity));
+  await leaveFirm(app, firmCallerOf(context, identity), activeFirmId(identity));
   return new Response(null, { status: 204 });
 });

@@ -1,16 +1,17 @@
-import { appContext } from '../../../lib/server/app-context';
-import { getRecord } from '../../../lib/server/bank/record-service';
 import { requireAnyPermission } from '../../../lib/server/http/guards';
+import { readParams, uuidParam } from '../../../lib/server/http/params';
 import { handleApi, json } from '../../../lib/server/http/respond';
+import { getRecord } from '../../../lib/server/records/record-service';
 
 export const prerender = false;
 
 /** One test record; private details only for the owning firm; 404 when the caller may not see it. */
-export const GET = handleApi(async (context) => {
+export const GET = handleApi(async (context, app) => {
   const identity = await requireAnyPermission(context, [
     ['bank', 'browse'],
     ['submission', 'read'],
     ['submission', 'review'],
   ]);
-  return json(await getRecord(appContext().database.db, identity, context.params.id ?? ''));
+  const { id } = readParams(context, { id: uuidParam });
+  return json(await getRecord(app, identity, id));
 });

@@ -1,5 +1,4 @@
 import { resetPasswordSchema } from '../../../lib/schemas/account';
-import { appContext } from '../../../lib/server/app-context';
 import { recordAudit } from '../../../lib/server/audit/audit-log';
 import { rethrowAuthError } from '../../../lib/server/auth/auth-errors';
 import { enforceRateLimit } from '../../../lib/server/http/rate-limit-guard';
@@ -8,16 +7,18 @@ import { handleApi, json, readJsonBody } from '../../../lib/server/http/respond'
 export const prerender = false;
 
 /** Sets a new password from a mailed token; every session of that person is signed out. */
-export const POST = handleApi(async (context) => {
+export const POST = handleApi(async (context, app) => {
   const body = await readJsonBody(context.request, resetPasswordSchema);
   await enforceRateLimit(context, 'password-reset');
-  const { auth, database } = appContext();
   try {
-    await auth.api.resetPassword({ body: { newPassword: body.password, token: body.token }, headers: context.request.headers });
+    await app.auth.api.resetPassword({
+      body: { newPassword: body.password, token: body.token },
+      headers: context.request.headers,
+    });
   } catch (error) {
     rethrowAuthError(error, {}, 'This reset link has expired or was already used. Ask for a new one.');
   }
-  await recordAudit(database.db, {
+  await recordAudit(app.db, {
     actorUserId: null,
     firmId: null,
     action: 'auth.password_reset',

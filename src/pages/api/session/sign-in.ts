@@ -1,5 +1,4 @@
 import { signInSchema } from '../../../lib/schemas/account';
-import { appContext } from '../../../lib/server/app-context';
 import { recordAudit } from '../../../lib/server/audit/audit-log';
 import { authErrorCode } from '../../../lib/server/auth/auth-errors';
 import { ApiError } from '../../../lib/server/http/api-error';
@@ -9,12 +8,11 @@ import { handleApi, json, readJsonBody } from '../../../lib/server/http/respond'
 export const prerender = false;
 
 /** E-mail and password sign-in; the same answer whether the address is unknown or the password wrong. */
-export const POST = handleApi(async (context) => {
+export const POST = handleApi(async (context, app) => {
   const body = await readJsonBody(context.request, signInSchema);
   await enforceRateLimit(context, 'sign-in');
-  const { auth, database } = appContext();
   try {
-    const { headers } = await auth.api.signInEmail({
+    const { headers } = await app.auth.api.signInEmail({
       body: { email: body.email, password: body.password, rememberMe: true },
       headers: context.request.headers,
       returnHeaders: true,
@@ -24,7 +22,7 @@ export const POST = handleApi(async (context) => {
     return response;
   } catch (error) {
     const code = authErrorCode(error);
-    await recordAudit(database.db, {
+    await recordAudit(app.db, {
       actorUserId: null,
       firmId: null,
       action: 'auth.sign_in',

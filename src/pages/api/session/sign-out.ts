@@ -1,21 +1,15 @@
-import { appContext } from '../../../lib/server/app-context';
-import { recordAudit } from '../../../lib/server/audit/audit-log';
+import { auditedBy, recordAudit } from '../../../lib/server/audit/audit-log';
+import { actingPerson } from '../../../lib/server/http/acting';
 import { handleApi, json } from '../../../lib/server/http/respond';
 
 export const prerender = false;
 
 /** Ends the current session. */
-export const POST = handleApi(async (context) => {
-  const { auth, database } = appContext();
+export const POST = handleApi(async (context, app) => {
   const identity = context.locals.identity;
-  const { headers } = await auth.api.signOut({ headers: context.request.headers, returnHeaders: true });
+  const { headers } = await app.auth.api.signOut({ headers: context.request.headers, returnHeaders: true });
   if (identity) {
-    await recordAudit(database.db, {
-      actorUserId: identity.user.id,
-      firmId: identity.actor.firmId,
-      action: 'auth.sign_out',
-      ipAddress: context.clientAddress,
-    });
+    await recordAudit(app.db, { ...auditedBy(actingPerson(context, identity)), action: 'auth.sign_out' });
   }
   const response = json({ ok: true });
   for (const cookie of headers.getSetCookie()) response.headers.append('set-cookie', cookie);

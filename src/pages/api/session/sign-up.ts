@@ -1,5 +1,4 @@
 import { signUpSchema } from '../../../lib/schemas/account';
-import { appContext } from '../../../lib/server/app-context';
 import { rethrowAuthError } from '../../../lib/server/auth/auth-errors';
 import { enforceRateLimit } from '../../../lib/server/http/rate-limit-guard';
 import { handleApi, json, readJsonBody } from '../../../lib/server/http/respond';
@@ -9,11 +8,11 @@ export const prerender = false;
 export const SIGN_UP_ANSWER = 'Check your inbox: if this address can be used, a confirmation link is on its way.';
 
 /** Creates an account and mails a confirmation link. An address already in use gets the same answer. */
-export const POST = handleApi(async (context) => {
+export const POST = handleApi(async (context, app) => {
   const body = await readJsonBody(context.request, signUpSchema);
   await enforceRateLimit(context, 'sign-up');
   try {
-    await appContext().auth.api.signUpEmail({
+    await app.auth.api.signUpEmail({
       body: { name: body.name, email: body.email, password: body.password, callbackURL: '/welcome' },
       headers: context.request.headers,
     });

@@ -1,12 +1,11 @@
-import { appContext } from '../../../lib/server/app-context';
-import { listVocabulary } from '../../../lib/server/bank/vocabulary-service';
 import { requireIdentity } from '../../../lib/server/http/guards';
 import { handleApi, json } from '../../../lib/server/http/respond';
+import { listVocabulary } from '../../../lib/server/vocabulary/vocabulary-service';
 
 export const prerender = false;
 
 /** Regions and geological units, for any signed-in person. */
-export const GET = handleApi(async (context) => {
+export const GET = handleApi(async (context, app) => {
   requireIdentity(context);
-  return json(await listVocabulary(appContext().database.db));
+  return json(await listVocabulary(app));
 });

@@ -1,15 +1,15 @@
-import { appContext } from '../../../../lib/server/app-context';
 import { revokeApiKey } from '../../../../lib/server/firms/api-key-service';
-import { firmDepsFrom } from '../../../../lib/server/firms/firm-service';
+import { firmCallerOf } from '../../../../lib/server/http/acting';
 import { activeFirmId, requirePermission } from '../../../../lib/server/http/guards';
+import { authIdParam, readParams } from '../../../../lib/server/http/params';
 import { handleApi } from '../../../../lib/server/http/respond';
 
 export const prerender = false;
 
 /** Revokes one of the active firm's API keys. */
-export const DELETE = handleApi(async (context) => {
+export const DELETE = handleApi(async (context, app) => {
   const identity = await requirePermission(context, 'firm', 'manage-api-keys');
-  const { auth, database } = appContext();
-  await revokeApiKey(firmDepsFrom(context, identity, { auth, db: database.db }), activeFirmId(identity), context.params.id ?? '');
+  const { id } = readParams(context, { id: authIdParam });
+  await revokeApiKey(app, firmCallerOf(context, identity), activeFirmId(identity), id);
   return new Response(null, { status: 204 });
 });

@@ -1,26 +1,20 @@
-import { createApiKeySchema } from '../../../../lib/schemas/firm';
-import { appContext } from '../../../../lib/server/app-context';
+import { createApiKeySchema } from '../../../../lib/contracts/firms';
 import { createApiKey, listApiKeys } from '../../../../lib/server/firms/api-key-service';
-import { firmDepsFrom } from '../../../../lib/server/firms/firm-service';
+import { firmCallerOf } from '../../../../lib/server/http/acting';
 import { activeFirmId, requirePermission } from '../../../../lib/server/http/guards';
 import { handleApi, json, readJsonBody } from '../../../../lib/server/http/respond';
 
 export const prerender = false;
 
 /** The active firm's API keys (owner or admin only). */
-export const GET = handleApi(async (context) => {
+export const GET = handleApi(async (context, app) => {
   const identity = await requirePermission(context, 'firm', 'manage-api-keys');
-  const { auth, database } = appContext();
-  return json({ keys: await listApiKeys(firmDepsFrom(context, identity, { auth, db: database.db }), activeFirmId(identity)) });
+  return json(await listApiKeys(app, firmCallerOf(context, identity), activeFirmId(identity)));
 });
 
 /** Creates a key for the firm's upload scripts; the secret is in this answer only. */
-export const POST = handleApi(async (context) => {
+export const POST = handleApi(async (context, app) => {
   const identity = await requirePermission(context, 'firm', 'manage-api-keys');
   const body = await readJsonBody(context.request, createApiKeySchema);
-  const { auth, database } = appContext();
-  return json(
-    await createApiKey(firmDepsFrom(context, identity, { auth, db: database.db }), activeFirmId(identity), body.name),
-    201,
-  );
+  return json(await createApiKey(app, firmCallerOf(context, identity), activeFirmId(identity), body.name), 201);
 });

@@ -1,33 +1,26 @@
-import { changeMemberRoleSchema } from '../../../../lib/schemas/firm';
-import { appContext } from '../../../../lib/server/app-context';
-import { changeMemberRole, firmDepsFrom, removeMember } from '../../../../lib/server/firms/firm-service';
+import { changeMemberRoleSchema } from '../../../../lib/contracts/firms';
+import { changeMemberRole, removeMember } from '../../../../lib/server/firms/firm-service';
+import { firmCallerOf } from '../../../../lib/server/http/acting';
 import { activeFirmId, requirePermission } from '../../../../lib/server/http/guards';
+import { authIdParam, readParams } from '../../../../lib/server/http/params';
 import { handleApi, json, readJsonBody } from '../../../../lib/server/http/respond';
 
 export const prerender = false;
 
+const params = { memberId: authIdParam };
+
 /** Changes a member's role in the caller's active firm (owner or admin only). */
-export const PATCH = handleApi(async (context) => {
+export const PATCH = handleApi(async (context, app) => {
   const identity = await requirePermission(context, 'firm', 'manage-members');
+  const { memberId } = readParams(context, params);
   const body = await readJsonBody(context.request, changeMemberRoleSchema);
-  const { auth, database } = appContext();
-  const member = await changeMemberRole(
-    firmDepsFrom(context, identity, { auth, db: database.db }),
-    activeFirmId(identity),
-    context.params.memberId ?? '',
-    body.role,
-  );
-  return json({ member });
+  return json(await changeMemberRole(app, firmCallerOf(context, identity), activeFirmId(identity), memberId, body.role));
 });
 
 /** Removes a member from the caller's active firm (owner or admin only). */
-export const DELETE = handleApi(async (context) => {
+export const DELETE = handleApi(async (context, app) => {
   const identity = await requirePermission(context, 'firm', 'manage-members');
-  const { auth, database } = appContext();
-  await removeMember(
-    firmDepsFrom(context, identity, { auth, db: database.db }),
-    activeFirmId(identity),
-    context.params.memberId ?? '',
-  );
+  const { memberId } = readParams(context, params);
+  await removeMember(app, firmCallerOf(context, identity), activeFirmId(identity), memberId);
   return new Response(null, { status: 204 });
 });

@@ -1,19 +1,14 @@
-import { appContext } from '../../../../lib/server/app-context';
-import { firmDepsFrom } from '../../../../lib/server/firms/firm-service';
 import { respondToInvitation } from '../../../../lib/server/firms/invitation-service';
+import { firmCallerOf } from '../../../../lib/server/http/acting';
 import { requireIdentity } from '../../../../lib/server/http/guards';
+import { authIdParam, readParams } from '../../../../lib/server/http/params';
 import { handleApi, json } from '../../../../lib/server/http/respond';
 
 export const prerender = false;
 
 /** Accepts an invitation addressed to the signed-in person; the firm becomes active. */
-export const POST = handleApi(async (context) => {
+export const POST = handleApi(async (context, app) => {
   const identity = requireIdentity(context);
-  const { auth, database } = appContext();
-  const firm = await respondToInvitation(
-    firmDepsFrom(context, identity, { auth, db: database.db }),
-    context.params.id ?? '',
-    true,
-  );
-  return json({ firm });
+  const { id } = readParams(context, { id: authIdParam });
+  return json(await respondToInvitation(app, firmCallerOf(context, identity), id, true));
 });

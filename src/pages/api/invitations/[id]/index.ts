@@ -1,19 +1,14 @@
-import { appContext } from '../../../../lib/server/app-context';
-import { firmDepsFrom } from '../../../../lib/server/firms/firm-service';
 import { invitationForRecipient } from '../../../../lib/server/firms/invitation-service';
+import { firmCallerOf } from '../../../../lib/server/http/acting';
 import { requireIdentity } from '../../../../lib/server/http/guards';
+import { authIdParam, readParams } from '../../../../lib/server/http/params';
 import { handleApi, json } from '../../../../lib/server/http/respond';
 
 export const prerender = false;
 
 /** An invitation addressed to the signed-in person. */
-export const GET = handleApi(async (context) => {
+export const GET = handleApi(async (context, app) => {
   const identity = requireIdentity(context);
-  const { auth, database } = appContext();
-  const invitation = await invitationForRecipient(
-    firmDepsFrom(context, identity, { auth, db: database.db }),
-    context.params.id ?? '',
-  );
-  const { firmId: _firmId, ...visible } = invitation;
-  return json({ invitation: visible });
+  const { id } = readParams(context, { id: authIdParam });
+  return json(await invitationForRecipient(app, firmCallerOf(context, identity), id));
 });

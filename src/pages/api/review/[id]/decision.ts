@@ -1,24 +1,18 @@
-import { reviewDecisionSchema } from '../../../../lib/schemas/review';
-import { appContext } from '../../../../lib/server/app-context';
-import { config } from '../../../../lib/server/config';
+import { reviewDecisionSchema } from '../../../../lib/contracts/review';
+import { actingPerson } from '../../../../lib/server/http/acting';
 import { requirePermission } from '../../../../lib/server/http/guards';
+import { readParams, uuidParam } from '../../../../lib/server/http/params';
 import { handleApi, json, readJsonBody } from '../../../../lib/server/http/respond';
 import { decideSubmission } from '../../../../lib/server/review/review-decision';
 
 export const prerender = false;
 
 /** Accept, return (with comments) or reject a submission (data stewards). */
-export const POST = handleApi(async (context) => {
+export const POST = handleApi(async (context, app) => {
   const identity = await requirePermission(context, 'submission', 'review');
+  const { id } = readParams(context, { id: uuidParam });
   const decision = await readJsonBody(context.request, reviewDecisionSchema);
-  const { database, outbox } = appContext();
-  const result = await decideSubmission(
-    database.db,
-    { userId: identity.user.id, ipAddress: context.clientAddress },
-    context.params.id ?? '',
-    decision,
-    config.appUrl,
-  );
-  outbox?.kick();
-  return json({ submission: result });
+  const result = await decideSubmission(app, actingPerson(context, identity), id, decision);
+  app.kickOutbox();
+  return json(result);
 });

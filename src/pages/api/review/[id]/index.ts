@@ -1,12 +1,13 @@
-import { appContext } from '../../../../lib/server/app-context';
 import { requirePermission } from '../../../../lib/server/http/guards';
+import { readParams, uuidParam } from '../../../../lib/server/http/params';
 import { handleApi, json } from '../../../../lib/server/http/respond';
 import { reviewDetail } from '../../../../lib/server/review/review-detail';
 
 export const prerender = false;
 
 /** A submission for review: shared values, comparison with the deposit, flags, raw readings, history. */
-export const GET = handleApi(async (context) => {
+export const GET = handleApi(async (context, app) => {
   await requirePermission(context, 'submission', 'review');
-  return json(await reviewDetail(appContext().database.db, context.params.id ?? ''));
+  const { id } = readParams(context, { id: uuidParam });
+  return json(await reviewDetail(app, id));
 });

@@ -1,22 +1,16 @@
-import { appContext } from '../../../../lib/server/app-context';
-import { config } from '../../../../lib/server/config';
 import { resubmit } from '../../../../lib/server/contribute/own-submissions';
-import { activeFirmId, requirePermission } from '../../../../lib/server/http/guards';
+import { contributorOf } from '../../../../lib/server/http/acting';
+import { requirePermission } from '../../../../lib/server/http/guards';
+import { readParams, uuidParam } from '../../../../lib/server/http/params';
 import { handleApi, json } from '../../../../lib/server/http/respond';
 
 export const prerender = false;
 
 /** Sends a returned submission back to the stewards after corrections. */
-export const POST = handleApi(async (context) => {
+export const POST = handleApi(async (context, app) => {
   const identity = await requirePermission(context, 'submission', 'create');
-  const { database, outbox } = appContext();
-  const contributor = {
-    userId: identity.user.id,
-    firmId: activeFirmId(identity),
-    ipAddress: context.clientAddress,
-    via: 'browser' as const,
-  };
-  const result = await resubmit(database.db, contributor, context.params.id ?? '', config.appUrl);
-  outbox?.kick();
-  return json({ submission: result });
+  const { id } = readParams(context, { id: uuidParam });
+  const result = await resubmit(app, contributorOf(context, identity), id);
+  app.kickOutbox();
+  return json(result);
 });

@@ -1,18 +1,14 @@
-import { appContext } from '../../../../lib/server/app-context';
 import { withdraw } from '../../../../lib/server/contribute/own-submissions';
-import { activeFirmId, requirePermission } from '../../../../lib/server/http/guards';
+import { contributorOf } from '../../../../lib/server/http/acting';
+import { requirePermission } from '../../../../lib/server/http/guards';
+import { readParams, uuidParam } from '../../../../lib/server/http/params';
 import { handleApi, json } from '../../../../lib/server/http/respond';
 
 export const prerender = false;
 
 /** Withdraws a submission that is not yet accepted. */
-export const POST = handleApi(async (context) => {
+export const POST = handleApi(async (context, app) => {
   const identity = await requirePermission(context, 'submission', 'create');
-  const contributor = {
-    userId: identity.user.id,
-    firmId: activeFirmId(identity),
-    ipAddress: context.clientAddress,
-    via: 'browser' as const,
-  };
-  return json({ submission: await withdraw(appContext().database.db, contributor, context.params.id ?? '') });
+  const { id } = readParams(context, { id: uuidParam });
+  return json(await withdraw(app, contributorOf(context, identity), id));
 });

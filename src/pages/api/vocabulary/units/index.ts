@@ -1,16 +1,14 @@
-import { createUnitSchema } from '../../../../lib/schemas/vocabulary';
-import { appContext } from '../../../../lib/server/app-context';
-import { createUnit } from '../../../../lib/server/bank/vocabulary-service';
-import { actingPerson } from '../../../../lib/server/http/curator';
+import { createUnitSchema } from '../../../../lib/contracts/vocabulary';
+import { actingPerson } from '../../../../lib/server/http/acting';
 import { requirePermission } from '../../../../lib/server/http/guards';
 import { handleApi, json, readJsonBody } from '../../../../lib/server/http/respond';
+import { createUnit } from '../../../../lib/server/vocabulary/vocabulary-service';
 
 export const prerender = false;
 
 /** Adds a geological unit (stewards and platform admins). */
-export const POST = handleApi(async (context) => {
+export const POST = handleApi(async (context, app) => {
   const identity = await requirePermission(context, 'vocabulary', 'manage');
   const body = await readJsonBody(context.request, createUnitSchema);
-  const unit = await createUnit(appContext().database.db, actingPerson(identity, context.clientAddress), body);
-  return json({ unit }, 201);
+  return json({ unit: await createUnit(app, actingPerson(context, identity), body) }, 201);
 });

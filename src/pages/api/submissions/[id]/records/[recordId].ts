@@ -1,27 +1,16 @@
-import { recordCorrectionSchema } from '../../../../../lib/schemas/record-correction';
-import { appContext } from '../../../../../lib/server/app-context';
+import { recordCorrectionSchema } from '../../../../../lib/contracts/submissions';
 import { editReturnedRecord } from '../../../../../lib/server/contribute/edit-record';
-import { activeFirmId, requirePermission } from '../../../../../lib/server/http/guards';
+import { contributorOf } from '../../../../../lib/server/http/acting';
+import { requirePermission } from '../../../../../lib/server/http/guards';
+import { readParams, uuidParam } from '../../../../../lib/server/http/params';
 import { handleApi, json, readJsonBody } from '../../../../../lib/server/http/respond';
 
 export const prerender = false;
 
 /** Corrects a record of a returned submission (values in SI units, checked like an upload row). */
-export const PATCH = handleApi(async (context) => {
+export const PATCH = handleApi(async (context, app) => {
   const identity = await requirePermission(context, 'submission', 'create');
+  const { id, recordId } = readParams(context, { id: uuidParam, recordId: uuidParam });
   const body = await readJsonBody(context.request, recordCorrectionSchema);
-  const contributor = {
-    userId: identity.user.id,
-    firmId: activeFirmId(identity),
-    ipAddress: context.clientAddress,
-    via: 'browser' as const,
-  };
-  const record = await editReturnedRecord(
-    appContext().database.db,
-    contributor,
-    context.params.id ?? '',
-    context.params.recordId ?? '',
-    body.values,
-  );
-  return json({ record });
+  return json(await editReturnedRecord(app, contributorOf(context, identity), id, recordId, body.values));
 });
