@@ -4,8 +4,10 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { readmePreviewExample } from '../../../scripts/lib/readme-preview-example.mjs';
 import { previewEstimate } from '../../../src/lib/consolidation';
 import { type EstimatePreviewInput, estimatePreviewSchema } from '../../../src/lib/schemas/estimate-preview';
+import { DomainError } from '../../../src/lib/server/errors';
 import { createPreviewPool, type PreviewPool } from '../../../src/lib/server/estimates/preview-pool';
-import { ApiError } from '../../../src/lib/server/http/api-error';
+import { ERROR_STATUS } from '../../../src/lib/server/http/api-error';
+import { type HttpError, toHttpError } from '../../../src/lib/server/http/error-mapper';
 
 const DEV_ENTRY = new URL('../../../src/lib/server/estimates/preview-task-dev.mjs', import.meta.url).href;
 const example = estimatePreviewSchema.parse(readmePreviewExample());
@@ -22,11 +24,13 @@ const pool = (threads: number, maxQueue: number) => {
 };
 afterAll(() => Promise.all(pools.map((p) => p.close())));
 
-async function refusal(promise: Promise<unknown>): Promise<ApiError> {
+/** The refusal as the API answers it (through the one error mapper). */
+async function refusal(promise: Promise<unknown>): Promise<HttpError> {
   try {
     await promise;
   } catch (error) {
-    if (error instanceof ApiError) return error;
+    const http = error instanceof DomainError ? toHttpError(error) : null;
+    if (http) return http;
     throw error;
   }
   throw new Error('expected a refusal');
@@ -42,7 +46,7 @@ describe('preview worker pool', () => {
     const layer = { ...(example.layers[0] as EstimatePreviewInput['layers'][number]), unitWeightBelowWater: 9.5 };
     const error = await refusal(pool(1, 4).run({ ...example, layers: [layer] }));
     expect(error.code).toBe('UNPROCESSABLE');
-    expect(error.status).toBe(422);
+    expect(ERROR_STATUS[error.code]).toBe(422);
     expect(error.issues?.map((i) => i.path)).toEqual(['layers.0.unitWeightBelowWater']);
   });
 
@@ -57,11 +61,11 @@ describe('preview worker pool', () => {
     const outcomes = await Promise.all(runs);
     // one running, one waiting; the other three refused
     expect(outcomes.filter((o) => o === 'done')).toHaveLength(2);
-    const refused = outcomes.filter((o): o is ApiError => o instanceof ApiError);
+    const refused = outcomes.filter((o) => o instanceof DomainError).map((o) => toHttpError(o) as HttpError);
     expect(refused).toHaveLength(3);
     for (const error of refused) {
       expect(error.code).toBe('SERVICE_UNAVAILABLE');
-      expect(error.status).toBe(503);
+      expect(ERROR_STATUS[error.code]).toBe(503);
       expect(Number(error.headers?.['retry-after'])).toBeGreaterThanOrEqual(1);
     }
     expect(small.stats()).toMatchObject({ threads: 1, queued: 0, maxQueue: 1, completed: 2 });

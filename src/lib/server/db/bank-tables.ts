@@ -1,9 +1,9 @@
 import type { ColumnType, Generated, GeneratedAlways, Insertable, Selectable, Updateable } from 'kysely';
+import type { ImportFlag, TestRecordStatus } from '../../contracts/records';
+import type { SubmissionSourceKind, SubmissionStatus } from '../../contracts/submissions';
 import type { SampleQualityClass } from '../../import/sample-quality';
 import { TEST_METHODS, type TestMethod } from '../../import/test-method';
 import { USCS_SYMBOLS, type UscsSymbol } from '../../import/uscs';
-import type { ImportFlag, TestRecordStatus } from '../../contracts/records';
-import type { SubmissionSourceKind, SubmissionStatus } from '../../contracts/submissions';
 import { GENESIS_VALUES } from '../../schemas/vocabulary';
 import type { Timestamp } from './schema';
 
@@ -13,9 +13,6 @@ import type { Timestamp } from './schema';
 export const GENESES = GENESIS_VALUES;
 export type Genesis = (typeof GENESES)[number];
 
-/** ASTM D2487 group symbols, loading methods and sample quality classes: the import core's closed lists. */
-export { type SampleQualityClass, TEST_METHODS, type TestMethod, USCS_SYMBOLS, type UscsSymbol };
-
 export { TEST_RECORD_STATUSES, type TestRecordStatus } from '../../contracts/records';
 export {
   SUBMISSION_SOURCE_KINDS,
@@ -23,6 +20,8 @@ export {
   type SubmissionSourceKind,
   type SubmissionStatus,
 } from '../../contracts/submissions';
+/** ASTM D2487 group symbols, loading methods and sample quality classes: the import core's closed lists. */
+export { type SampleQualityClass, TEST_METHODS, type TestMethod, USCS_SYMBOLS, type UscsSymbol };
 export const RECORD_KINDS = ['oedometer', 'field_back_analysis'] as const;
 export type RecordKind = (typeof RECORD_KINDS)[number];
 export const STRESS_RANGES = ['NC', 'OC'] as const;
