@@ -38,7 +38,10 @@ describe('the lint rules keep the layers apart', () => {
     ['src/lib/contracts/probe.ts', "import { config } from '../server/config';\nexport const a = config;\n"],
     ['src/pages/api/probe.ts', "import { sql } from 'kysely';\nexport const a = sql;\n"],
     ['src/pages/api/probe.ts', "import { appContext } from '../../lib/server/app-context';\nexport const a = appContext;\n"],
-    ['src/pages/api/probe.ts', "import { connectDatabase } from '../../lib/server/db/connect';\nexport const a = connectDatabase;\n"],
+    [
+      'src/pages/api/probe.ts',
+      "import { connectDatabase } from '../../lib/server/db/connect';\nexport const a = connectDatabase;\n",
+    ],
     ['src/lib/server/records/probe.ts', "import { ApiError } from '../http/api-error';\nexport const a = ApiError;\n"],
   ])('refuses in %s: %s', (path, source) => {
     expect(restrictedImports(path, source)).toBeGreaterThan(0);
@@ -50,7 +53,10 @@ describe('the lint rules keep the layers apart', () => {
     ['src/lib/server/probe.ts', "import pg from 'pg';\nexport const a = pg;\n"],
     ['src/lib/contracts/probe.ts', "import { z } from 'zod';\nexport const a = z;\n"],
     ['src/lib/server/http/probe.ts', "import { ApiError } from './api-error';\nexport const a = ApiError;\n"],
-    ['src/pages/api/probe.ts', "import { listRecords } from '../../lib/server/records/record-service';\nexport const a = listRecords;\n"],
+    [
+      'src/pages/api/probe.ts',
+      "import { listRecords } from '../../lib/server/records/record-service';\nexport const a = listRecords;\n",
+    ],
   ])('allows in %s: %s', (path, source) => {
     expect(restrictedImports(path, source)).toBe(0);
   });

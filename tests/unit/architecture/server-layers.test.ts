@@ -34,12 +34,15 @@ describe('repositories hold the SQL', () => {
     expect(repositories.length).toBeGreaterThanOrEqual(8);
   });
 
-  it.each(repositories.map((file) => [relative(serverDir, file)]))('%s: every exported function takes the transaction first', (name) => {
-    const text = readFileSync(join(serverDir, name), 'utf8');
-    const exported = [...text.matchAll(/export (?:async )?function (\w+)(?:<[^>]*>)?\(\s*([^,)]*)/g)];
-    expect(exported.length).toBeGreaterThan(0);
-    for (const [, fn, first] of exported) expect(`${fn}(${first}`).toBe(`${fn}(trx: Transaction<Database>`);
-  });
+  it.each(repositories.map((file) => [relative(serverDir, file)]))(
+    '%s: every exported function takes the transaction first',
+    (name) => {
+      const text = readFileSync(join(serverDir, name), 'utf8');
+      const exported = [...text.matchAll(/export (?:async )?function (\w+)(?:<[^>]*>)?\(\s*([^,)]*)/g)];
+      expect(exported.length).toBeGreaterThan(0);
+      for (const [, fn, first] of exported) expect(`${fn}(${first}`).toBe(`${fn}(trx: Transaction<Database>`);
+    },
+  );
 
   it('no service, endpoint or page outside the repositories and the infrastructure runs a query', () => {
     const pages = walk(join(root, 'src/pages'));
