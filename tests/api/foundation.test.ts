@@ -94,8 +94,9 @@ describe('POST /api/preferences/unit-system', () => {
   });
 
   it('never redirects to another site', async () => {
-    for (const returnTo of ['//evil.example/', 'https://evil.example/', '/\\evil.example']) {
+    for (const returnTo of ['//evil.example/', 'https://evil.example/', '/\\evil.example', '/\t/evil.example/', '/x\ny']) {
       const response = await post(new URLSearchParams({ unitSystem: 'SI', returnTo }), 'application/x-www-form-urlencoded');
+      expect(response.status).toBe(303);
       expect(response.headers.get('location')).toBe('/');
     }
   });

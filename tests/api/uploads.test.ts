@@ -235,7 +235,11 @@ describe('all or nothing', () => {
     const stored = await call('POST', '/api/submissions', firm.cookie, form([header, ...good].join('\n'), 'atomic.csv'));
     expect(stored.status).toBe(201);
     const again = await call('POST', '/api/submissions', firm.cookie, form([header, ...good].join('\n'), 'atomic.csv'));
-    expect([409, 422]).toContain(again.status);
+    expect(again.status, again.text).toBe(409);
+    expect((again.body as ErrorBody).error).toMatchObject({
+      code: 'CONFLICT',
+      message: expect.stringMatching(/already uploaded/),
+    });
     expect(await recordCount(firm.id)).toBe(30);
   });
 });

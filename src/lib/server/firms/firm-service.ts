@@ -1,4 +1,5 @@
 import type { ChangedMember, CreatedFirm, FirmOverview } from '../../contracts/firms';
+import { slugify } from '../../import/vocabulary-match';
 import type { FirmRole } from '../../permissions/roles';
 import type { AppServices } from '../app-services';
 import { rethrowAuthError } from '../auth/auth-errors';
@@ -9,14 +10,9 @@ import { findFirm, findMemberOfFirm, membersOfFirm, pendingInvitationsOfFirm } f
 
 type FirmApp = Pick<AppServices, 'db' | 'auth'>;
 
-function slugify(name: string): string {
-  const base = name
-    .normalize('NFKD')
-    .replace(/[\u0300-\u036f]/g, '')
-    .toLowerCase()
-    .replace(/[^a-z0-9]+/g, '-')
-    .replace(/^-+|-+$/g, '')
-    .slice(0, 40);
+/** A firm's slug: its name's, cut to 40 characters, with a random suffix so two firms may share a name. */
+function firmSlug(name: string): string {
+  const base = slugify(name).slice(0, 40);
   return `${base || 'firm'}-${Math.random().toString(36).slice(2, 7)}`;
 }
 
@@ -24,7 +20,7 @@ function slugify(name: string): string {
 export async function createFirm(app: FirmApp, caller: FirmCaller, name: string): Promise<CreatedFirm> {
   let firm: { id: string; name: string; slug: string } | null = null;
   try {
-    firm = await app.auth.api.createOrganization({ headers: caller.headers, body: { name, slug: slugify(name) } });
+    firm = await app.auth.api.createOrganization({ headers: caller.headers, body: { name, slug: firmSlug(name) } });
   } catch (error) {
     rethrowAuthError(error, { YOU_HAVE_REACHED_THE_MAXIMUM_NUMBER_OF_ORGANIZATIONS: 'You belong to as many firms as allowed.' });
   }

@@ -3,7 +3,7 @@ import { actingPerson } from '../../../../lib/server/http/acting';
 import { requirePermission } from '../../../../lib/server/http/guards';
 import { readParams, uuidParam } from '../../../../lib/server/http/params';
 import { handleApi, json, readJsonBody } from '../../../../lib/server/http/respond';
-import { updateUnit } from '../../../../lib/server/vocabulary/vocabulary-service';
+import { updateUnit } from '../../../../lib/server/vocabulary/unit-service';
 
 export const prerender = false;
 

@@ -2,7 +2,7 @@ import { createUnitSchema } from '../../../../lib/contracts/vocabulary';
 import { actingPerson } from '../../../../lib/server/http/acting';
 import { requirePermission } from '../../../../lib/server/http/guards';
 import { handleApi, json, readJsonBody } from '../../../../lib/server/http/respond';
-import { createUnit } from '../../../../lib/server/vocabulary/vocabulary-service';
+import { createUnit } from '../../../../lib/server/vocabulary/unit-service';
 
 export const prerender = false;
 
