@@ -1,0 +1,130 @@
+// One index: its documents (by internal number), settings, facet data per field and the text index.
+import { TypedFastBitSet } from 'typedfastbitset';
+import { tokenize } from '../text/normalize';
+import { type DocWords, TextIndex } from '../text/text-index';
+import { inAttributeList } from './attribute-patterns';
+import { type Doc, documentFacts, textValues, valueAtPath } from './documents';
+import { FieldIndex } from './field-index';
+import { defaultSettings, type Settings } from './settings';
+
+export class SearchIndex {
+  readonly uid: string;
+  primaryKey: string | null;
+  readonly createdAt: string;
+  updatedAt: string;
+  settings: Settings = defaultSettings();
+  /** Every field path ever seen, in order of first appearance. */
+  readonly fields: string[] = [];
+  private readonly fieldSet = new Set<string>();
+  readonly alive = new TypedFastBitSet();
+  readonly docs: Array<Doc | undefined> = [];
+  readonly externalIds: Array<string | undefined> = [];
+  readonly internalIds = new Map<string, number>();
+  readonly facets = new Map<string, FieldIndex>();
+  text = new TextIndex();
+  private nextId = 0;
+
+  constructor(uid: string, primaryKey: string | null, createdAt = new Date().toISOString()) {
+    this.uid = uid;
+    this.primaryKey = primaryKey;
+    this.createdAt = createdAt;
+    this.updatedAt = createdAt;
+  }
+
+  get documentCount(): number {
+    return this.internalIds.size;
+  }
+
+  touch(): void {
+    this.updatedAt = new Date().toISOString();
+  }
+
+  /** Stores a document under an external id, replacing any earlier one. */
+  put(externalId: string, doc: Doc): void {
+    const previous = this.internalIds.get(externalId);
+    if (previous !== undefined) this.removeInternal(previous);
+    // A replaced document keeps its place in storage order, as the engine keeps its internal id.
+    const id = previous ?? this.nextId;
+    if (previous === undefined) this.nextId += 1;
+    this.docs[id] = doc;
+    this.externalIds[id] = externalId;
+    this.internalIds.set(externalId, id);
+    this.alive.add(id);
+    for (const [path, facts] of documentFacts(doc)) {
+      if (!this.fieldSet.has(path)) {
+        this.fieldSet.add(path);
+        this.fields.push(path);
+      }
+      let field = this.facets.get(path);
+      if (!field) {
+        field = new FieldIndex();
+        this.facets.set(path, field);
+      }
+      field.add(id, facts);
+    }
+    this.text.add(id, this.wordsOf(doc));
+  }
+
+  delete(externalId: string): boolean {
+    const id = this.internalIds.get(externalId);
+    if (id === undefined) return false;
+    this.removeInternal(id);
+    return true;
+  }
+
+  private removeInternal(id: number): void {
+    const doc = this.docs[id] as Doc;
+    for (const [path, facts] of documentFacts(doc)) this.facets.get(path)?.remove(id, facts);
+    this.text.remove(id);
+    this.internalIds.delete(this.externalIds[id] as string);
+    this.docs[id] = undefined;
+    this.externalIds[id] = undefined;
+    this.alive.remove(id);
+  }
+
+  getByExternal(externalId: string): Doc | undefined {
+    const id = this.internalIds.get(externalId);
+    return id === undefined ? undefined : this.docs[id];
+  }
+
+  /** The searchable fields in their ranking order. */
+  searchableFields(): string[] {
+    const list = this.settings.searchableAttributes;
+    if (list.includes('*')) return this.fields.filter((f) => !f.includes('.'));
+    return list;
+  }
+
+  private wordsOf(doc: Doc): DocWords {
+    const list = this.settings.searchableAttributes;
+    const fields = list.includes('*') ? Object.keys(doc) : list;
+    const out: DocWords = [];
+    for (const field of fields) {
+      const value = valueAtPath(doc, field);
+      if (value === undefined) continue;
+      const words = textValues(value).flatMap(tokenize);
+      if (words.length) out.push([field, words]);
+    }
+    return out;
+  }
+
+  /** Rebuilds the words of every document (after searchableAttributes change). */
+  reindexText(): void {
+    this.text = new TextIndex();
+    this.alive.forEach((id) => {
+      this.text.add(id, this.wordsOf(this.docs[id] as Doc));
+    });
+  }
+
+  isSortable(field: string): boolean {
+    return inAttributeList(field, this.settings.sortableAttributes);
+  }
+
+  /** Every document in storage order. */
+  allDocuments(): Doc[] {
+    const out: Doc[] = [];
+    this.alive.forEach((id) => {
+      out.push(this.docs[id] as Doc);
+    });
+    return out;
+  }
+}
