@@ -34,7 +34,11 @@ export class FieldIndex {
   /** First number of each document (NaN none); further numbers in `numExtra`. */
   numFirst: Float64Array = new Float64Array(0);
   readonly numExtra = new Map<number, number[]>();
-  private sortedNumbers: { values: Float64Array; ids: Int32Array } | null = null;
+  /** (number, document) pairs sorted by number then document; kept up to date once built. */
+  private sortedValues: Float64Array | null = null;
+  private sortedIds: Int32Array = new Int32Array(0);
+  private sortedLength = 0;
+  private editsSinceBuild = 0;
   private sortedKeyIds: number[] | null = null;
   numberCount = 0;
 
@@ -59,7 +63,7 @@ export class FieldIndex {
       this.numFirst[id] = numbers[0] as number;
       if (numbers.length > 1) this.numExtra.set(id, numbers.slice(1));
       this.numberCount += 1;
-      this.sortedNumbers = null;
+      if (this.keepSorted(numbers.length)) for (const n of numbers) this.insertSorted(n, id);
     }
   }
 
@@ -79,10 +83,11 @@ export class FieldIndex {
       this.strExtra.delete(id);
     }
     if (facts.numbers.length) {
+      const numbers = this.numbersOf(id);
       this.numFirst[id] = Number.NaN;
       this.numExtra.delete(id);
       this.numberCount -= 1;
-      this.sortedNumbers = null;
+      if (this.keepSorted(numbers.length)) for (const n of numbers) this.removeSorted(n, id);
     }
   }
 
@@ -118,25 +123,73 @@ export class FieldIndex {
     return extra ? [first, ...extra] : [first];
   }
 
+  /** Whether to update the sorted pairs in place (few edits) or drop them for a rebuild (bulk loads). */
+  private keepSorted(count: number): boolean {
+    if (!this.sortedValues) return false;
+    this.editsSinceBuild += count;
+    if (this.editsSinceBuild <= 5000) return true;
+    this.sortedValues = null;
+    return false;
+  }
+
+  private insertSorted(value: number, id: number): void {
+    let values = this.sortedValues as Float64Array;
+    if (this.sortedLength === values.length) {
+      const grown = new Float64Array(values.length * 2 + 16);
+      grown.set(values);
+      const ids = new Int32Array(grown.length);
+      ids.set(this.sortedIds);
+      this.sortedValues = grown;
+      this.sortedIds = ids;
+      values = grown;
+    }
+    let at = lowerBound(values.subarray(0, this.sortedLength), value, true);
+    while (at < this.sortedLength && values[at] === value && (this.sortedIds[at] as number) < id) at += 1;
+    values.copyWithin(at + 1, at, this.sortedLength);
+    this.sortedIds.copyWithin(at + 1, at, this.sortedLength);
+    values[at] = value;
+    this.sortedIds[at] = id;
+    this.sortedLength += 1;
+  }
+
+  private removeSorted(value: number, id: number): void {
+    const values = this.sortedValues as Float64Array;
+    let at = lowerBound(values.subarray(0, this.sortedLength), value, false);
+    while (at < this.sortedLength && values[at] === value && this.sortedIds[at] !== id) at += 1;
+    if (at >= this.sortedLength || values[at] !== value) return;
+    values.copyWithin(at, at + 1, this.sortedLength);
+    this.sortedIds.copyWithin(at, at + 1, this.sortedLength);
+    this.sortedLength -= 1;
+  }
+
   /** Every (number, document) pair sorted by number: for ranges, stats and ordered facet walks. */
   numbersSorted(): { values: Float64Array; ids: Int32Array } {
-    if (this.sortedNumbers) return this.sortedNumbers;
-    const pairs: Array<[number, number]> = [];
-    for (let id = 0; id < this.numFirst.length; id += 1) {
-      const first = this.numFirst[id] as number;
-      if (Number.isNaN(first)) continue;
-      pairs.push([first, id]);
-      for (const n of this.numExtra.get(id) ?? []) pairs.push([n, id]);
+    if (!this.sortedValues) {
+      const rawValues: number[] = [];
+      const rawIds: number[] = [];
+      for (let id = 0; id < this.numFirst.length; id += 1) {
+        const first = this.numFirst[id] as number;
+        if (Number.isNaN(first)) continue;
+        rawValues.push(first);
+        rawIds.push(id);
+        for (const n of this.numExtra.get(id) ?? []) {
+          rawValues.push(n);
+          rawIds.push(id);
+        }
+      }
+      const order = new Uint32Array(rawValues.length).map((_, i) => i);
+      order.sort((a, b) => (rawValues[a] as number) - (rawValues[b] as number) || (rawIds[a] as number) - (rawIds[b] as number));
+      const capacity = order.length + 1024;
+      this.sortedValues = new Float64Array(capacity);
+      this.sortedIds = new Int32Array(capacity);
+      order.forEach((from, i) => {
+        (this.sortedValues as Float64Array)[i] = rawValues[from] as number;
+        this.sortedIds[i] = rawIds[from] as number;
+      });
+      this.sortedLength = order.length;
+      this.editsSinceBuild = 0;
     }
-    pairs.sort((a, b) => a[0] - b[0] || a[1] - b[1]);
-    const values = new Float64Array(pairs.length);
-    const ids = new Int32Array(pairs.length);
-    pairs.forEach(([v, id], i) => {
-      values[i] = v;
-      ids[i] = id;
-    });
-    this.sortedNumbers = { values, ids };
-    return this.sortedNumbers;
+    return { values: this.sortedValues.subarray(0, this.sortedLength), ids: this.sortedIds.subarray(0, this.sortedLength) };
   }
 
   /** String key ids in ascending order of their normalized value. */

@@ -96,14 +96,15 @@ export class SearchIndex {
 
   private wordsOf(doc: Doc): DocWords {
     const list = this.settings.searchableAttributes;
-    const fields = list.includes('*') ? Object.keys(doc) : list;
     const out: DocWords = [];
-    for (const field of fields) {
-      const value = valueAtPath(doc, field);
-      if (value === undefined) continue;
-      const words = textValues(value).flatMap(tokenize);
+    const addField = (field: string, value: unknown) => {
+      if (value === undefined) return;
+      const words: string[] = [];
+      for (const text of textValues(value)) for (const word of tokenize(text)) words.push(word);
       if (words.length) out.push([field, words]);
-    }
+    };
+    if (list.includes('*')) for (const [field, value] of Object.entries(doc)) addField(field, value);
+    else for (const field of list) addField(field, valueAtPath(doc, field));
     return out;
   }
 

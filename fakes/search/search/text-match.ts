@@ -68,6 +68,13 @@ export function matchText(
   for (const term of excluded)
     for (const id of termHits(index, { ...term, typos: 0, prefix: false } as QueryTerm).hits.keys()) excludedIds.add(id);
   const fieldRank = new Map(index.searchableFields().map((f, i) => [f, i]));
+  const rankOfField = (field: string) =>
+    fieldRank.get(field) ?? fieldRank.get(field.split('.')[0] as string) ?? Number.MAX_SAFE_INTEGER;
+  // Which query term (by its place in the dropping order) each matched word belongs to.
+  const termOfWord = new Map<string, number>();
+  order.forEach((termIndex, place) => {
+    for (const w of perTerm[termIndex]?.words ?? []) if (!termOfWord.has(w)) termOfWord.set(w, place);
+  });
   const out = new Map<number, TextRank>();
   const lead = perTerm[order[0] as number];
   if (!lead) return out;
@@ -76,29 +83,25 @@ export function matchText(
     let words = 0;
     let typos = 0;
     let exact = 0;
-    const found = new Set<string>();
     for (const i of order) {
       const hit = perTerm[i]?.hits.get(id);
       if (!hit) break;
       words += 1;
       typos += hit.typos;
       if (hit.exact) exact += 1;
-      for (const w of perTerm[i]?.words ?? []) found.add(w);
     }
     if (strategy === 'all' && words < terms.length) continue;
     let attribute = Number.MAX_SAFE_INTEGER;
     let position = Number.MAX_SAFE_INTEGER;
-    for (const [field, list] of index.text.wordsOf(id)) {
-      const at = list.findIndex((w) => found.has(w));
-      if (at < 0) continue;
-      const rank = fieldRank.get(field) ?? fieldRank.get(field.split('.')[0] as string) ?? Number.MAX_SAFE_INTEGER;
-      if (rank < attribute) {
+    index.text.forEachWord(id, (field, at, word) => {
+      const place = termOfWord.get(word);
+      if (place === undefined || place >= words) return;
+      const rank = rankOfField(field);
+      if (rank < attribute || (rank === attribute && at < position)) {
         attribute = rank;
         position = at;
-      } else if (rank === attribute) {
-        position = Math.min(position, at);
       }
-    }
+    });
     out.set(id, { words, typos, attribute, position, exact });
   }
   return out;

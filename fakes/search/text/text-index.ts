@@ -1,5 +1,5 @@
-// The words of the searchable fields: a posting list per word, each document's words per field (for
-// phrases, attribute order and positions), and lookups with prefix and typo tolerance.
+// The words of the searchable fields: a posting list per word, each document's words per field as
+// word numbers (for phrases, attribute order and positions), and lookups with prefix and typo tolerance.
 import { Posting } from '../engine/posting';
 import { typoCost } from './typo-distance';
 
@@ -14,55 +14,109 @@ export interface Derivation {
 export type DocWords = Array<[field: string, words: string[]]>;
 
 export class TextIndex {
-  private readonly postings = new Map<string, Posting>();
-  private readonly docWords: Array<DocWords | undefined> = [];
+  private readonly wordIds = new Map<string, number>();
+  private readonly words: string[] = [];
+  private readonly postings: Array<Posting | undefined> = [];
+  private readonly fieldIds = new Map<string, number>();
+  private readonly fieldNames: string[] = [];
+  /** Per document: for each field, -(field number + 1) then the field's word numbers. */
+  private readonly docWords: Array<Int32Array | undefined> = [];
   private sortedWords: string[] | null = null;
   private readonly cache = new Map<string, Derivation[]>();
 
-  add(id: number, words: DocWords): void {
-    this.docWords[id] = words;
-    for (const [, list] of words) {
+  private wordId(word: string): number {
+    let id = this.wordIds.get(word);
+    if (id === undefined) {
+      id = this.words.length;
+      this.wordIds.set(word, id);
+      this.words.push(word);
+    }
+    return id;
+  }
+
+  private fieldId(field: string): number {
+    let id = this.fieldIds.get(field);
+    if (id === undefined) {
+      id = this.fieldNames.length;
+      this.fieldIds.set(field, id);
+      this.fieldNames.push(field);
+    }
+    return id;
+  }
+
+  add(id: number, fields: DocWords): void {
+    let size = 0;
+    for (const [, list] of fields) size += list.length + 1;
+    const packed = new Int32Array(size);
+    let at = 0;
+    for (const [field, list] of fields) {
+      packed[at++] = -(this.fieldId(field) + 1);
       for (const word of list) {
-        let posting = this.postings.get(word);
-        if (!posting) {
-          posting = new Posting();
-          this.postings.set(word, posting);
+        const wordId = this.wordId(word);
+        packed[at++] = wordId;
+        let posting = this.postings[wordId];
+        if (!posting || posting.size === 0) {
+          posting ??= new Posting();
+          this.postings[wordId] = posting;
           this.sortedWords = null;
           this.cache.clear();
         }
         posting.add(id);
       }
     }
+    this.docWords[id] = packed;
   }
 
   remove(id: number): void {
-    const words = this.docWords[id];
-    if (!words) return;
-    for (const [, list] of words) {
-      for (const word of list) {
-        const posting = this.postings.get(word);
-        if (!posting) continue;
-        posting.remove(id);
-        if (posting.size === 0) {
-          this.postings.delete(word);
-          this.sortedWords = null;
-          this.cache.clear();
-        }
+    const packed = this.docWords[id];
+    if (!packed) return;
+    for (const wordId of packed) {
+      if (wordId < 0) continue;
+      const posting = this.postings[wordId];
+      if (!posting) continue;
+      posting.remove(id);
+      if (posting.size === 0) {
+        this.sortedWords = null;
+        this.cache.clear();
       }
     }
     this.docWords[id] = undefined;
   }
 
+  /** Calls `visit(field, position, word)` for every word of a document, field by field. */
+  forEachWord(id: number, visit: (field: string, position: number, word: string) => void): void {
+    const packed = this.docWords[id];
+    if (!packed) return;
+    let field = '';
+    let position = 0;
+    for (const value of packed) {
+      if (value < 0) {
+        field = this.fieldNames[-value - 1] as string;
+        position = 0;
+      } else {
+        visit(field, position, this.words[value] as string);
+        position += 1;
+      }
+    }
+  }
+
   wordsOf(id: number): DocWords {
-    return this.docWords[id] ?? [];
+    const out: DocWords = [];
+    this.forEachWord(id, (field, position, word) => {
+      if (position === 0) out.push([field, []]);
+      out[out.length - 1]?.[1].push(word);
+    });
+    return out;
   }
 
   posting(word: string): Posting | undefined {
-    return this.postings.get(word);
+    const id = this.wordIds.get(word);
+    const posting = id === undefined ? undefined : this.postings[id];
+    return posting?.size ? posting : undefined;
   }
 
   private sorted(): string[] {
-    if (!this.sortedWords) this.sortedWords = [...this.postings.keys()].sort();
+    if (!this.sortedWords) this.sortedWords = this.words.filter((_, i) => (this.postings[i]?.size ?? 0) > 0).sort();
     return this.sortedWords;
   }
 
@@ -74,7 +128,7 @@ export class TextIndex {
     const out: Derivation[] = [];
     const words = this.sorted();
     if (allowedTypos === 0) {
-      if (this.postings.has(query)) out.push({ word: query, typos: 0, prefix: false });
+      if (this.posting(query)) out.push({ word: query, typos: 0, prefix: false });
       if (asPrefix) {
         for (let i = lowerBoundText(words, query); i < words.length && (words[i] as string).startsWith(query); i += 1) {
           if (words[i] !== query) out.push({ word: words[i] as string, typos: 0, prefix: true });

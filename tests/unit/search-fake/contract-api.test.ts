@@ -3,8 +3,8 @@
 // (Meilisearch docs: "Asynchronous operations", "Documents", "Settings", "Errors", "Authorization").
 import { MeilisearchApiError } from 'meilisearch';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { SOIL_RECORDS } from './support/soil-records';
 import { apiError, idsOf, seedSoilIndex } from './support/seed';
+import { SOIL_RECORDS } from './support/soil-records';
 import { type ContractTarget, SKIP_NOTE, startTarget, TARGETS, uniqueUid } from './support/targets';
 
 async function raw(target: ContractTarget, method: string, path: string, body?: string, headers: Record<string, string> = {}) {
@@ -43,7 +43,12 @@ describe.each(TARGETS)('the API of $name', ({ name, real, skip }) => {
         expect(typeof enqueued.taskUid).toBe('number');
         expect(Number.isNaN(Date.parse(String(enqueued.enqueuedAt)))).toBe(false);
         const done = await target.client.tasks.waitForTask(enqueued.taskUid);
-        expect(done).toMatchObject({ uid: enqueued.taskUid, status: 'succeeded', error: null, details: { receivedDocuments: 1, indexedDocuments: 1 } });
+        expect(done).toMatchObject({
+          uid: enqueued.taskUid,
+          status: 'succeeded',
+          error: null,
+          details: { receivedDocuments: 1, indexedDocuments: 1 },
+        });
         expect(done.startedAt).not.toBeNull();
         expect(done.finishedAt).not.toBeNull();
         const listed = await target.client.tasks.getTasks({ indexUids: [uid], types: ['documentAdditionOrUpdate'] });
@@ -52,12 +57,24 @@ describe.each(TARGETS)('the API of $name', ({ name, real, skip }) => {
 
       it('report a failed task without changing the index', async () => {
         const uid = fresh('failed');
-        await target.client.index(uid).addDocuments([{ id: 1, unit: 'Marsh Peat' }], { primaryKey: 'id' }).waitTask();
-        const failed = await target.client.index(uid).addDocuments([{ id: 2, unit: 'ok' }, { id: 'not valid!', unit: 'bad' }]).waitTask();
+        await target.client
+          .index(uid)
+          .addDocuments([{ id: 1, unit: 'Marsh Peat' }], { primaryKey: 'id' })
+          .waitTask();
+        const failed = await target.client
+          .index(uid)
+          .addDocuments([
+            { id: 2, unit: 'ok' },
+            { id: 'not valid!', unit: 'bad' },
+          ])
+          .waitTask();
         expect(failed.status).toBe('failed');
         expect(failed.error).toMatchObject({ code: 'invalid_document_id', type: 'invalid_request' });
         expect((await target.client.index(uid).getDocuments()).total).toBe(1);
-        const missing = await target.client.index(uid).addDocuments([{ unit: 'no id' }]).waitTask();
+        const missing = await target.client
+          .index(uid)
+          .addDocuments([{ unit: 'no id' }])
+          .waitTask();
         expect(missing.error?.code).toBe('missing_document_id');
       });
 
@@ -104,12 +121,21 @@ describe.each(TARGETS)('the API of $name', ({ name, real, skip }) => {
 
       it('infer the primary key from the one field ending in "id", and refuse to guess between two', async () => {
         const uid = fresh('infer');
-        await target.client.index(uid).addDocuments([{ record_id: 'r-1', unit: 'x' }]).waitTask();
+        await target.client
+          .index(uid)
+          .addDocuments([{ record_id: 'r-1', unit: 'x' }])
+          .waitTask();
         expect((await target.client.getRawIndex(uid)).primaryKey).toBe('record_id');
         const two = fresh('two');
-        const failed = await target.client.index(two).addDocuments([{ record_id: 1, sample_id: 2 }]).waitTask();
+        const failed = await target.client
+          .index(two)
+          .addDocuments([{ record_id: 1, sample_id: 2 }])
+          .waitTask();
         expect(failed.error?.code).toBe('index_primary_key_multiple_candidates_found');
-        const none = await target.client.index(fresh('none')).addDocuments([{ unit: 'x' }]).waitTask();
+        const none = await target.client
+          .index(fresh('none'))
+          .addDocuments([{ unit: 'x' }])
+          .waitTask();
         expect(none.error?.code).toBe('index_primary_key_no_candidate_found');
       });
 
@@ -175,10 +201,12 @@ describe.each(TARGETS)('the API of $name', ({ name, real, skip }) => {
         expect(reset.pagination).toEqual({ maxTotalHits: 1000 });
       });
 
-      it('refuse values of the wrong type with the setting\'s own code', async () => {
+      it("refuse values of the wrong type with the setting's own code", async () => {
         const uid = fresh('badsettings');
         await seedSoilIndex(target.client, uid);
-        const error = await apiError(target.client.index(uid).updateSettings({ filterableAttributes: 'uscs' as unknown as string[] }));
+        const error = await apiError(
+          target.client.index(uid).updateSettings({ filterableAttributes: 'uscs' as unknown as string[] }),
+        );
         expect(error).toMatchObject({ status: 400, code: 'invalid_settings_filterable_attributes' });
         const pagination = await apiError(target.client.index(uid).updatePagination({ maxTotalHits: -1 }));
         expect(pagination).toMatchObject({ status: 400, code: 'invalid_settings_pagination' });
@@ -213,13 +241,18 @@ describe.each(TARGETS)('the API of $name', ({ name, real, skip }) => {
 
       it('names the sortable attributes when a sort is refused', async () => {
         const error = await apiError(target.client.index(uid).search(null, { sort: ['description:asc'] }));
-        expect(error.message).toBe(`Index \`${uid}\`: Attribute \`description\` is not sortable. Available sortable attributes are: \`cc, depth_m, unit, uscs\`.`);
+        expect(error.message).toBe(
+          `Index \`${uid}\`: Attribute \`description\` is not sortable. Available sortable attributes are: \`cc, depth_m, unit, uscs\`.`,
+        );
       });
 
       it('answers index_not_found for a search on a missing index, as a MeilisearchApiError', async () => {
         const promise = target.client.index(uniqueUid('missing')).search('clay');
         await expect(promise).rejects.toBeInstanceOf(MeilisearchApiError);
-        expect(await apiError(target.client.index(uniqueUid('missing')).search('clay'))).toMatchObject({ status: 404, code: 'index_not_found' });
+        expect(await apiError(target.client.index(uniqueUid('missing')).search('clay'))).toMatchObject({
+          status: 404,
+          code: 'index_not_found',
+        });
       });
     });
 

@@ -3,8 +3,8 @@
 // != and NOT include documents without the field; = compares case-insensitively; ranges are
 // inclusive for TO; a number bound also matches strings that sort after it; arrays match on any element).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { ALL_IDS } from './support/soil-records';
 import { apiError, idsOf, seedSoilIndex } from './support/seed';
+import { ALL_IDS } from './support/soil-records';
 import { type ContractTarget, SKIP_NOTE, startTarget, TARGETS, uniqueUid } from './support/targets';
 
 const CASES: Array<[filter: string | Array<string | string[]>, expected: number[]]> = [
@@ -52,7 +52,10 @@ const CASES: Array<[filter: string | Array<string | string[]>, expected: number[
   ['lab = anything', []],
   ['', ALL_IDS],
   [['uscs = CH', 'depth_m < 10'], [1]],
-  [[['uscs = CL', 'uscs = PT'], 'depth_m < 10'], [2, 3]],
+  [
+    [['uscs = CL', 'uscs = PT'], 'depth_m < 10'],
+    [2, 3],
+  ],
   [[['tags = loose', 'tags = shells']], [1, 4]],
   [[], ALL_IDS],
 ];
@@ -110,7 +113,9 @@ describe.each(TARGETS)('filters against $name', ({ name, real, skip }) => {
     it('refuses attributes that are not filterable and lists those that are', async () => {
       const error = await apiError(target.client.index(uid).search(null, { filter: 'description = clay' }));
       expect(error).toMatchObject({ status: 400, code: 'invalid_search_filter' });
-      expect(error.message).toContain('Attribute `description` is not filterable. Available filterable attribute patterns are: `cc`, `depth_m`, `lab`, `note`, `tags`, `unit`, `uscs`.');
+      expect(error.message).toContain(
+        'Attribute `description` is not filterable. Available filterable attribute patterns are: `cc`, `depth_m`, `lab`, `note`, `tags`, `unit`, `uscs`.',
+      );
       expect(error.message).toContain('\n1:12 description = clay');
     });
 
@@ -122,7 +127,9 @@ describe.each(TARGETS)('filters against $name', ({ name, real, skip }) => {
     it('refuses comparison operators where an attribute allows only equality', async () => {
       const strict = uniqueUid('granular');
       await seedSoilIndex(target.client, strict, {
-        filterableAttributes: [{ attributePatterns: ['depth_m'], features: { facetSearch: false, filter: { equality: true, comparison: false } } }],
+        filterableAttributes: [
+          { attributePatterns: ['depth_m'], features: { facetSearch: false, filter: { equality: true, comparison: false } } },
+        ],
       });
       try {
         expect(idsOf((await target.client.index(strict).search(null, { filter: 'depth_m = 9' })).hits)).toEqual([2]);

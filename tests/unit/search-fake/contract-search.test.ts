@@ -110,7 +110,10 @@ describe.each(TARGETS)('search against $name', ({ name, real, skip }) => {
         [['depth_m:desc'], [5, 4, 2, 7, 1, 3, 6, 8]],
         [['cc:asc'], [8, 5, 2, 7, 1, 3, 6, 4]],
         [['cc:desc'], [3, 1, 7, 2, 5, 8, 6, 4]],
-        [['uscs:asc', 'depth_m:desc'], [5, 1, 2, 8, 6, 7, 3, 4]],
+        [
+          ['uscs:asc', 'depth_m:desc'],
+          [5, 1, 2, 8, 6, 7, 3, 4],
+        ],
       ])('%j orders %j (numbers before strings, missing values last)', async (sort, expected) => {
         expect(idsOf((await index().search(null, { sort })).hits)).toEqual(expected);
       });
@@ -166,7 +169,9 @@ describe.each(TARGETS)('search against $name', ({ name, real, skip }) => {
         try {
           const all = await target.client.index(hidden).search(null, { filter: 'id = 2' });
           expect(all.hits).toEqual([{ id: 2, uscs: 'CL' }]);
-          const asked = await target.client.index(hidden).search(null, { filter: 'id = 2', attributesToRetrieve: ['unit', 'uscs'] });
+          const asked = await target.client
+            .index(hidden)
+            .search(null, { filter: 'id = 2', attributesToRetrieve: ['unit', 'uscs'] });
           expect(asked.hits).toEqual([{ uscs: 'CL' }]);
         } finally {
           await target.client.deleteIndexIfExists(hidden);
@@ -181,7 +186,10 @@ describe.each(TARGETS)('search against $name', ({ name, real, skip }) => {
           { indexUid: uid, filter: 'depth_m > 10', facets: ['uscs'] },
         ],
       });
-      expect(results.map((r) => sorted(idsOf(r.hits)))).toEqual([[1, 5], [4, 5]]);
+      expect(results.map((r) => sorted(idsOf(r.hits)))).toEqual([
+        [1, 5],
+        [4, 5],
+      ]);
       expect(results[0]?.indexUid).toBe(uid);
       expect(results[1]?.facetDistribution).toEqual({ uscs: { CH: 1, SM: 1 } });
     });

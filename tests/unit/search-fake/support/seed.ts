@@ -20,7 +20,9 @@ export function idsOf(hits: Array<Record<string, unknown>>): number[] {
 }
 
 /** The error body a failed request carried (MeilisearchApiError keeps it as `cause`). */
-export async function apiError(promise: Promise<unknown>): Promise<{ status: number; code: string; message: string; type: string }> {
+export async function apiError(
+  promise: Promise<unknown>,
+): Promise<{ status: number; code: string; message: string; type: string }> {
   try {
     await promise;
   } catch (error) {
