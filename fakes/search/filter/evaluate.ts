@@ -14,7 +14,7 @@ interface Bound {
 
 function positionSuffix(token: Token): string {
   const column = Array.from(token.source.slice(0, token.start)).length + 1;
-  return `\n${column}:${column + Array.from(token.source.substr(token.start, token.length)).length} ${token.source}`;
+  return `\n${column}:${column + Array.from(token.source.slice(token.start, token.start + token.length)).length} ${token.source}`;
 }
 
 /** Refuses filters on attributes that are not filterable (400, with the patterns that are). */

@@ -149,7 +149,7 @@ describe.each(TARGETS)('the API of $name', ({ name, real, skip }) => {
         const fetched = await index.getDocuments({ filter: 'uscs = CH', fields: ['id'] });
         expect(fetched.results).toEqual([{ id: 1 }, { id: 5 }]);
         await index.deleteDocument(1).waitTask();
-        await index.deleteDocuments([2, '3']).waitTask();
+        await index.deleteDocuments(['2', '3']).waitTask();
         const byFilter = await index.deleteDocuments({ filter: 'depth_m > 10' }).waitTask();
         expect(byFilter.details).toMatchObject({ deletedDocuments: 2 });
         expect(idsOf((await index.getDocuments({ limit: 50 })).results)).toEqual([6, 7, 8]);

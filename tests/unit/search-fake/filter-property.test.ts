@@ -21,7 +21,11 @@ type Leaf =
   | { op: 'TO'; field: string; from: string; to: string }
   | { op: 'IN' | 'NOT IN'; field: string; values: string[] }
   | { op: 'EXISTS' | 'NOT EXISTS' | 'IS NULL' | 'IS NOT NULL' | 'IS EMPTY' | 'IS NOT EMPTY'; field: string };
-type Expr = { kind: 'leaf'; leaf: Leaf } | { kind: 'and' | 'or'; children: Expr[] } | { kind: 'not'; child: Expr };
+type Expr =
+  | { kind: 'leaf'; leaf: Leaf }
+  | { kind: 'and'; children: Expr[] }
+  | { kind: 'or'; children: Expr[] }
+  | { kind: 'not'; child: Expr };
 
 const FIELDS = ['s', 'n', 'a', 'e', 'never'];
 const TEXTS = ['clay', 'Clay', 'CLAY ', 'silt', 'péat', 'peat', 'sand', '10', '2.5', 'zz', 'a b'];
@@ -76,7 +80,9 @@ const { expr } = fc.letrec<{ expr: Expr }>((tie) => ({
   expr: fc.oneof(
     { depthSize: 'small', withCrossShrink: true },
     fc.record({ kind: fc.constant('leaf' as const), leaf }),
-    fc.record({ kind: fc.constantFrom('and', 'or' as const), children: fc.array(tie('expr'), { minLength: 2, maxLength: 3 }) }),
+    fc
+      .record({ kind: fc.constantFrom('and', 'or' as const), children: fc.array(tie('expr'), { minLength: 2, maxLength: 3 }) })
+      .map((node) => node as Expr),
     fc.record({ kind: fc.constant('not' as const), child: tie('expr') }),
   ),
 }));

@@ -45,6 +45,8 @@ async function stop(server: Server, fake: SearchFake): Promise<void> {
   server.closeAllConnections();
   await new Promise<void>((resolve) => server.close(() => resolve()));
   await fake.engine.idle();
+  // Let the client's pooled keep-alive sockets see the close before the next request.
+  await new Promise((resolve) => setTimeout(resolve, 50));
 }
 
 export async function startFake(): Promise<ContractTarget> {
