@@ -49,7 +49,15 @@ describe('the search fake as a process', () => {
     await start(port);
     const client = new Meilisearch({ host: `http://127.0.0.1:${port}`, apiKey: key });
     const index = client.index('records');
-    const added = await index.addDocuments([{ id: 'a', unit: 'Marsh Peat' }, { id: 'b', unit: 'River Sand' }], { primaryKey: 'id' }).waitTask();
+    const added = await index
+      .addDocuments(
+        [
+          { id: 'a', unit: 'Marsh Peat' },
+          { id: 'b', unit: 'River Sand' },
+        ],
+        { primaryKey: 'id' },
+      )
+      .waitTask();
     expect(added.status).toBe('succeeded');
     expect((await index.updateFilterableAttributes(['unit']).waitTask()).status).toBe('succeeded');
     child?.kill('SIGKILL');
