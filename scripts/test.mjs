@@ -79,16 +79,18 @@ function runVitest(projects, env) {
   for (const project of projects) {
     let passed = 0;
     let failed = 0;
+    let skipped = 0;
     for (const file of json.testResults) {
       const inProject = file.name.includes(`/tests/${project}/`);
       if (!inProject) continue;
       const assertions = file.assertionResults ?? [];
       passed += assertions.filter((a) => a.status === 'passed').length;
+      skipped += assertions.filter((a) => a.status === 'skipped' || a.status === 'pending').length;
       const failedHere = assertions.filter((a) => a.status === 'failed').length;
       failed += failedHere;
       if (file.status === 'failed' && failedHere === 0) failed += 1;
     }
-    record(project, passed, failed);
+    record(project, passed, failed, skipped ? `${skipped} skipped` : '');
   }
   if (result.status !== 0 && json.numFailedTests === 0 && json.numFailedTestSuites === 0) {
     record('vitest', 0, 1, `exited with ${result.status}`);

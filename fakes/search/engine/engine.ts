@@ -7,6 +7,8 @@ import type { SearchIndex } from './search-index';
 import type { SnapshotStore } from './snapshot';
 import { isoDuration, newTask, publicTask, type StoredTask, summary, type Task } from './tasks';
 
+const MAX_KEPT_TASKS = 10_000;
+
 export class Engine {
   readonly indexes = new Map<string, SearchIndex>();
   private readonly tasks: StoredTask[] = [];
@@ -53,6 +55,23 @@ export class Engine {
   /** Resolves once every task enqueued so far has finished (used at shutdown and in tests). */
   async idle(): Promise<void> {
     while (this.running) await this.running;
+  }
+
+  /** Keeps the newest finished tasks (and every unfinished one), as the engine caps its task history. */
+  private forgetOldTasks(): void {
+    const excess = this.tasks.length - MAX_KEPT_TASKS;
+    if (excess <= 0) return;
+    let removed = 0;
+    for (let i = 0; i < this.tasks.length && removed < excess; ) {
+      const task = this.tasks[i] as StoredTask;
+      if (task.operation) {
+        i += 1;
+        continue;
+      }
+      this.tasks.splice(i, 1);
+      this.byUid.delete(task.uid);
+      removed += 1;
+    }
   }
 
   private schedule(): void {
@@ -114,6 +133,7 @@ export class Engine {
       task.duration = isoDuration(startedAt, finishedAt);
       delete task.operation;
     }
+    this.forgetOldTasks();
     if (this.store) {
       await this.store
         .saveTasks({ nextTaskUid: this.nextTaskUid, nextBatchUid: this.nextBatchUid, tasks: this.tasks })
