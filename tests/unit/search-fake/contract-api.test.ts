@@ -168,6 +168,31 @@ describe.each(TARGETS)('the API of $name', ({ name, real, skip }) => {
           status: 400,
           body: { code: 'malformed_payload', type: 'invalid_request' },
         });
+        expect(await raw(target, 'POST', `/indexes/${uid}/documents`, '')).toMatchObject({
+          status: 400,
+          body: { code: 'missing_payload' },
+        });
+        expect(await raw(target, 'POST', `/indexes/${uid}/documents`, 'id,unit', { 'content-type': 'text/plain' })).toMatchObject(
+          {
+            status: 415,
+            body: { code: 'invalid_content_type' },
+          },
+        );
+      });
+
+      it('keep their primary key once set', async () => {
+        const uid = fresh('pk');
+        await target.client
+          .index(uid)
+          .addDocuments([{ id: 1 }], { primaryKey: 'id' })
+          .waitTask();
+        const other = await target.client
+          .index(uid)
+          .addDocuments([{ id: 2, code: 'x' }], { primaryKey: 'code' })
+          .waitTask();
+        expect(other.status).toBe('failed');
+        expect(other.error?.code).toBe('index_primary_key_already_exists');
+        expect((await target.client.index(uid).getDocuments()).total).toBe(1);
       });
     });
 
