@@ -71,8 +71,12 @@ function deleteDocuments(indexes: Indexes, op: Extract<Operation, { type: 'docum
 function updateSettings(indexes: Indexes, op: Extract<Operation, { type: 'settingsUpdate' }>) {
   const index = indexes.get(op.indexUid) ?? new SearchIndex(op.indexUid, null);
   const { next } = mergeSettings(index.settings, op.changes);
-  const searchableChanged = JSON.stringify(next.searchableAttributes) !== JSON.stringify(index.settings.searchableAttributes);
+  const same = (key: 'searchableAttributes' | 'filterableAttributes' | 'sortableAttributes' | 'rankingRules') =>
+    JSON.stringify(next[key]) === JSON.stringify(index.settings[key]);
+  const facetsChanged = !same('filterableAttributes') || !same('sortableAttributes') || !same('rankingRules');
+  const searchableChanged = !same('searchableAttributes');
   index.settings = next;
+  if (facetsChanged) index.reindexFacets();
   if (searchableChanged) index.reindexText();
   indexes.set(op.indexUid, index);
   index.touch();

@@ -2,7 +2,7 @@
 import { TypedFastBitSet } from 'typedfastbitset';
 import { tokenize } from '../text/normalize';
 import { type DocWords, TextIndex } from '../text/text-index';
-import { inAttributeList } from './attribute-patterns';
+import { inAttributeList, ruleMatches } from './attribute-patterns';
 import { type Doc, documentFacts, textValues, valueAtPath } from './documents';
 import { FieldIndex } from './field-index';
 import { defaultSettings, type Settings } from './settings';
@@ -21,6 +21,7 @@ export class SearchIndex {
   readonly externalIds: Array<string | undefined> = [];
   readonly internalIds = new Map<string, number>();
   readonly facets = new Map<string, FieldIndex>();
+  private readonly facetedCache = new Map<string, boolean>();
   text = new TextIndex();
   private nextId = 0;
 
@@ -55,12 +56,7 @@ export class SearchIndex {
         this.fieldSet.add(path);
         this.fields.push(path);
       }
-      let field = this.facets.get(path);
-      if (!field) {
-        field = new FieldIndex();
-        this.facets.set(path, field);
-      }
-      field.add(id, facts);
+      if (this.isFaceted(path)) this.facetField(path).add(id, facts);
     }
     this.text.add(id, this.wordsOf(doc));
   }
@@ -74,7 +70,7 @@ export class SearchIndex {
 
   private removeInternal(id: number): void {
     const doc = this.docs[id] as Doc;
-    for (const [path, facts] of documentFacts(doc)) this.facets.get(path)?.remove(id, facts);
+    for (const [path, facts] of documentFacts(doc)) if (this.isFaceted(path)) this.facets.get(path)?.remove(id, facts);
     this.text.remove(id);
     this.internalIds.delete(this.externalIds[id] as string);
     this.docs[id] = undefined;
@@ -114,6 +110,50 @@ export class SearchIndex {
     this.alive.forEach((id) => {
       this.text.add(id, this.wordsOf(this.docs[id] as Doc));
     });
+  }
+
+  private facetField(path: string): FieldIndex {
+    let field = this.facets.get(path);
+    if (!field) {
+      field = new FieldIndex();
+      this.facets.set(path, field);
+    }
+    return field;
+  }
+
+  /**
+   * Whether a field's values are kept for filtering, facets and sorting: filterable or sortable
+   * fields and those of custom ranking rules, as the engine indexes only those.
+   */
+  isFaceted(path: string): boolean {
+    let faceted = this.facetedCache.get(path);
+    if (faceted === undefined) {
+      const { filterableAttributes, rankingRules } = this.settings;
+      const rankedBy = rankingRules.flatMap((rule) => /^(.+):(asc|desc)$/.exec(rule)?.[1] ?? []);
+      faceted =
+        filterableAttributes.some((rule) => ruleMatches(rule, path)) || this.isSortable(path) || inAttributeList(path, rankedBy);
+      this.facetedCache.set(path, faceted);
+    }
+    return faceted;
+  }
+
+  /** Rebuilds the facet data of every document (after the filterable, sortable or ranking settings change). */
+  reindexFacets(): void {
+    this.facets.clear();
+    this.facetedCache.clear();
+    this.alive.forEach((id) => {
+      for (const [path, facts] of documentFacts(this.docs[id] as Doc))
+        if (this.isFaceted(path)) this.facetField(path).add(id, facts);
+    });
+  }
+
+  /** How many documents hold each top-level field. */
+  fieldDistribution(): Record<string, number> {
+    const out: Record<string, number> = {};
+    this.alive.forEach((id) => {
+      for (const key of Object.keys(this.docs[id] as Doc)) out[key] = (out[key] ?? 0) + 1;
+    });
+    return out;
   }
 
   isSortable(field: string): boolean {

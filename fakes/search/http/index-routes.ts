@@ -59,12 +59,7 @@ async function objectBody(ctx: RouteContext): Promise<Record<string, unknown>> {
 }
 
 function statsOf(index: SearchIndex) {
-  const fieldDistribution: Record<string, number> = {};
-  for (const name of index.fields) {
-    const field = index.facets.get(name);
-    if (field && !name.includes('.')) fieldDistribution[name] = field.exists.size();
-  }
-  return { numberOfDocuments: index.documentCount, isIndexing: false, fieldDistribution };
+  return { numberOfDocuments: index.documentCount, isIndexing: false, fieldDistribution: index.fieldDistribution() };
 }
 
 export const indexRoutes = [
