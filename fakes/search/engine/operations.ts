@@ -5,7 +5,7 @@ import { filterDocuments } from '../filter/evaluate';
 import { filterFromJson } from '../filter/from-json';
 import { type Doc, idOfDocument, inferPrimaryKey } from './documents';
 import { SearchIndex } from './search-index';
-import { mergeSettings } from './settings';
+import { mergeSettings } from './settings-validation';
 
 export type Operation =
   | { type: 'indexCreation'; indexUid: string; primaryKey: string | null }

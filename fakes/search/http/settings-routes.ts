@@ -1,5 +1,6 @@
 // Settings: the whole object (GET, PATCH, DELETE) and one setting per route (GET, PUT or PATCH, DELETE).
-import { defaultSettings, mergeSettings, SETTING_ROUTES, type Settings } from '../engine/settings';
+import { defaultSettings, SETTING_ROUTES, type Settings } from '../engine/settings';
+import { mergeSettings } from '../engine/settings-validation';
 import { checkUid, indexOf } from './index-routes';
 import { parseJson } from './request';
 import { accepted, ok, type Reply, type RouteContext, route } from './routes';
