@@ -40,7 +40,7 @@ function demoSignIns() {
   return JSON.parse(readFileSync(file, 'utf8'));
 }
 
-function printBanner(inboxUrl) {
+function printBanner(inboxUrl, searchUrl) {
   const url = `http://127.0.0.1:${settings.appPort}`;
   const people = demoSignIns();
   const lines = ['', `  Claybank is running${dev ? ' (astro dev)' : ''}:  ${url}`, ''];
@@ -51,6 +51,7 @@ function printBanner(inboxUrl) {
     lines.push('  Demo sign-ins: none yet.');
   }
   lines.push('', `  Mail sent by the app:  ${url}/dev/inbox   (fake SMTP relay, inbox data at ${inboxUrl})`);
+  lines.push(`  Search service:        ${searchUrl}   (local search fake, data in ${join(dataDir, 'search')})`);
   lines.push('  Press Ctrl-C to stop everything this command started.', '');
   console.log(lines.join('\n'));
 }
@@ -60,6 +61,7 @@ await runMain(async () => {
   await stack.assertPortFree(settings.appPort, 'PORT', 'app');
   await stack.assertPortFree(settings.smtpPort, 'MAIL_FAKE_SMTP_PORT', 'mail fake (SMTP)');
   await stack.assertPortFree(settings.mailHttpPort, 'MAIL_FAKE_HTTP_PORT', 'mail fake (inbox)');
+  await stack.assertPortFree(settings.searchPort, 'SEARCH_FAKE_PORT', 'search fake');
   const { urls, secrets } = await stack.bringUpDatabase({ database: settings.database });
   stack.migrate(urls.ownerUrl);
   stack.seed({ appUrl: urls.appUrl, secrets, port: settings.appPort, signInsFile: join(dataDir, 'demo-sign-ins.json') });
@@ -68,7 +70,12 @@ await runMain(async () => {
     httpPort: settings.mailHttpPort,
     storeDir: join(dataDir, 'mail'),
   });
-  const env = stack.appEnvironment({ port: settings.appPort, appUrl: urls.appUrl, secrets, mail });
+  const search = await stack.startSearchFake({
+    port: settings.searchPort,
+    storeDir: join(dataDir, 'search'),
+    key: secrets.searchKey,
+  });
+  const env = stack.appEnvironment({ port: settings.appPort, appUrl: urls.appUrl, secrets, mail, search });
   let app;
   if (dev) {
     app = await stack.serveDevApp(env);
@@ -77,7 +84,7 @@ await runMain(async () => {
     stack.buildApp(outDir);
     app = await stack.serveBuiltApp(outDir, env);
   }
-  printBanner(mail.inboxUrl);
+  printBanner(mail.inboxUrl, search.url);
   app.once('exit', async (code) => {
     await new Promise((r) => setTimeout(r, 200));
     if (isStopping()) return;

@@ -142,6 +142,7 @@ async function main() {
   let stackUrls = null;
   let secrets = null;
   let mail = null;
+  let search = null;
   if (needsStack) {
     const database = `claybank_test_${process.pid}`;
     console.log(`\n• Test database ${database}`);
@@ -154,7 +155,10 @@ async function main() {
     stack.migrate(urls.ownerUrl);
     stack.seed({ appUrl: urls.appUrl, secrets, port: 4321, signInsFile: join(runDir, 'demo-sign-ins.json') });
     mail = await stack.startMailFake({ smtpPort: await freePort(), httpPort: await freePort(), storeDir: join(runDir, 'mail') });
+    search = await stack.startSearchFake({ port: await freePort(), storeDir: join(runDir, 'search'), key: secrets.searchKey });
     Object.assign(env, {
+      CLAYBANK_TEST_SEARCH_URL: search.url,
+      CLAYBANK_TEST_SEARCH_KEY: search.key,
       CLAYBANK_TEST_DATABASE_URL: urls.appUrl,
       CLAYBANK_TEST_OWNER_URL: urls.ownerUrl,
       CLAYBANK_TEST_SMTP_URL: mail.smtpUrl,
@@ -179,7 +183,7 @@ async function main() {
       return finish(started);
     }
     const port = await freePort();
-    const appEnv = stack.appEnvironment({ port, appUrl: stackUrls.appUrl, secrets, mail });
+    const appEnv = stack.appEnvironment({ port, appUrl: stackUrls.appUrl, secrets, mail, search });
     await stack.serveBuiltApp(outDir, appEnv, { quiet: true });
     Object.assign(env, {
       CLAYBANK_TEST_BASE_URL: appEnv.APP_URL,

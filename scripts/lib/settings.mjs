@@ -23,6 +23,7 @@ export const settings = {
   pgPort: intFromEnv('PG_PORT', 54329),
   smtpPort: intFromEnv('MAIL_FAKE_SMTP_PORT', 2525),
   mailHttpPort: intFromEnv('MAIL_FAKE_HTTP_PORT', 2580),
+  searchPort: intFromEnv('SEARCH_FAKE_PORT', 7700),
   database: process.env.PG_DATABASE ?? 'claybank',
   ownerRole: 'claybank_owner',
   appRole: 'claybank_app',
@@ -39,9 +40,22 @@ export const checkoutId = createHash('sha256').update(projectDir).digest('hex').
 export function localSecrets(folder = dataDir) {
   mkdirSync(folder, { recursive: true });
   const file = join(folder, 'local-secrets.json');
-  if (existsSync(file)) return JSON.parse(readFileSync(file, 'utf8'));
   const make = () => randomBytes(24).toString('base64url');
-  const secrets = { pgSuperPassword: make(), pgOwnerPassword: make(), pgAppPassword: make(), authSecret: make() + make() };
+  if (existsSync(file)) {
+    const saved = JSON.parse(readFileSync(file, 'utf8'));
+    if (saved.searchKey) return saved;
+    // Files written before the search fake existed get its key added.
+    const withKey = { ...saved, searchKey: make() };
+    writeFileSync(file, JSON.stringify(withKey, null, 2), { mode: 0o600 });
+    return withKey;
+  }
+  const secrets = {
+    pgSuperPassword: make(),
+    pgOwnerPassword: make(),
+    pgAppPassword: make(),
+    authSecret: make() + make(),
+    searchKey: make(),
+  };
   writeFileSync(file, JSON.stringify(secrets, null, 2), { mode: 0o600 });
   return secrets;
 }

@@ -116,6 +116,22 @@ export async function startMailFake({ smtpPort, httpPort, storeDir, variablePref
   return { smtpUrl: `smtp://127.0.0.1:${smtpPort}`, inboxUrl: `http://127.0.0.1:${httpPort}` };
 }
 
+/** Starts the search fake (data kept under `storeDir`); returns the URL and key the app uses. */
+export async function startSearchFake({ port, storeDir, key, variable = 'SEARCH_FAKE_PORT' }) {
+  await assertPortFree(port, variable, 'search fake');
+  mkdirSync(storeDir, { recursive: true });
+  startChild('search', bin('tsx'), ['fakes/search/server.ts', '--port', String(port), '--dir', storeDir], {
+    cwd: projectDir,
+    env: {
+      ...process.env,
+      SEARCH_FAKE_KEY: key,
+      NODE_OPTIONS: [process.env.NODE_OPTIONS ?? '', ...NODE_SERVER_FLAGS].join(' ').trim(),
+    },
+  });
+  await waitForPort(port, 30_000, 'The search fake');
+  return { url: `http://127.0.0.1:${port}`, key };
+}
+
 function listFiles(dir) {
   if (!existsSync(dir)) return [];
   return readdirSync(dir, { withFileTypes: true }).flatMap((entry) => {
@@ -198,8 +214,9 @@ export function buildForTests(buildsDir) {
 }
 
 /** The environment the app server reads through astro:env. */
-export function appEnvironment({ port, appUrl, secrets, mail, mode = 'development' }) {
+export function appEnvironment({ port, appUrl, secrets, mail, search, mode = 'development' }) {
   return {
+    ...(search ? { MEILISEARCH_URL: search.url, MEILISEARCH_KEY: search.key } : {}),
     HOST: settings.host,
     PORT: String(port),
     APP_URL: `http://127.0.0.1:${port}`,

@@ -6,7 +6,7 @@ import { testEnv } from '../support/env';
 const base = testEnv('CLAYBANK_TEST_BASE_URL');
 
 describe('GET /api/health', () => {
-  it('reports the database and mail up', async () => {
+  it('reports the database, mail and search up', async () => {
     const response = await fetch(`${base}/api/health`);
     expect(response.status).toBe(200);
     const body = await response.json();
@@ -14,7 +14,7 @@ describe('GET /api/health', () => {
     expect(body.database.status).toBe('up');
     expect(body.database.schemaVersion).toMatch(/^\d{8}T\d{4}_/);
     expect(body.mail.status).toBe('up');
-    expect(body.search.status).toBe('not configured');
+    expect(body.search.status).toBe('up');
     expect(response.headers.get('cache-control')).toBe('no-store');
   });
 
@@ -48,6 +48,55 @@ describe('GET /api/health', () => {
     } finally {
       server.kill('SIGTERM');
     }
+  });
+});
+
+/** Starts a second server from the same build with some variables changed; returns its health answer. */
+async function healthWith(overrides: Record<string, string>): Promise<{ status: number; text: string }> {
+  const port = 40000 + Math.floor(Math.random() * 20000);
+  const server = spawn(process.execPath, [join(import.meta.dirname, '../../scripts/serve.mjs')], {
+    env: {
+      ...process.env,
+      CLAYBANK_BUILD_DIR: testEnv('CLAYBANK_TEST_BUILD_DIR'),
+      NODE_ENV: 'production',
+      HOST: '127.0.0.1',
+      PORT: String(port),
+      DATABASE_URL: testEnv('CLAYBANK_TEST_DATABASE_URL'),
+      SMTP_URL: testEnv('CLAYBANK_TEST_SMTP_URL'),
+      BETTER_AUTH_SECRET: 'test-secret-test-secret-test-secret-123',
+      ...overrides,
+    },
+    stdio: 'ignore',
+  });
+  try {
+    for (let attempt = 0; attempt < 60; attempt++) {
+      const response = await fetch(`http://127.0.0.1:${port}/api/health`).catch(() => null);
+      if (response) return { status: response.status, text: await response.text() };
+      await new Promise((r) => setTimeout(r, 250));
+    }
+    throw new Error('the second server did not start');
+  } finally {
+    server.kill('SIGTERM');
+  }
+}
+
+describe('GET /api/health with the search service unreachable or refusing', () => {
+  it('reports search down and the app degraded (200), without naming the service address', async () => {
+    const { status, text } = await healthWith({ MEILISEARCH_URL: 'http://127.0.0.1:1', MEILISEARCH_KEY: 'x' });
+    expect(status).toBe(200);
+    expect(JSON.parse(text)).toMatchObject({
+      status: 'degraded',
+      search: { status: 'down', detail: 'the search service did not answer' },
+    });
+    expect(text).not.toContain('127.0.0.1:1');
+  });
+
+  it('reports search down when the key is wrong', async () => {
+    const { text } = await healthWith({ MEILISEARCH_URL: testEnv('CLAYBANK_TEST_SEARCH_URL'), MEILISEARCH_KEY: 'not-the-key' });
+    expect(JSON.parse(text)).toMatchObject({
+      status: 'degraded',
+      search: { status: 'down', detail: 'the search service refused the key' },
+    });
   });
 });
 
