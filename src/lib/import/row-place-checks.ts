@@ -42,13 +42,21 @@ export function checkVocabulary(
   const written = row.text(key);
   if (written === null) return null;
   const entry = index.find(written);
+  if (entry?.retired) {
+    row.add(
+      key,
+      `"${entry.name}" is retired and takes no new uploads. Choose another of the bank’s ${plural}, or ask a data steward.`,
+    );
+    return null;
+  }
   if (entry) return entry;
   const near = index.closest(written);
-  const names = index.entries.slice(0, 6).map((e) => e.name);
+  const inUse = index.inUse;
+  const names = inUse.slice(0, 6).map((e) => e.name);
   const known =
-    index.entries.length === 0
+    inUse.length === 0
       ? ` The bank has no ${plural} yet; a data steward adds them.`
-      : ` Known ${plural}: ${names.join(', ')}${index.entries.length > names.length ? ', …' : ''}. A data steward can add new ones.`;
+      : ` Known ${plural}: ${names.join(', ')}${inUse.length > names.length ? ', …' : ''}. A data steward can add new ones.`;
   row.add(key, `"${written}" is not one of the bank’s ${plural}.${near ? ` Did you mean "${near.name}"?` : known}`);
   return null;
 }

@@ -3,6 +3,10 @@ export interface VocabularyEntry {
   id: string;
   name: string;
   slug: string;
+  /** other names uploads may use (earlier names, names of units merged into it) */
+  synonyms?: readonly string[];
+  /** a retired entry takes no new uploads */
+  retired?: boolean;
 }
 
 /** Lower case, accents dropped, runs of anything but letters and digits as one hyphen ("Vennmoor  Flats" → "vennmoor-flats"). */
@@ -16,9 +20,9 @@ export function slugify(text: string): string {
 }
 
 /**
- * Looks names up in one vocabulary list: a name or slug matches whatever its case, spacing and
- * punctuation. `closest` suggests the nearest entry for a misspelling (edit distance up to a quarter of
- * the length, at least 2).
+ * Looks names up in one vocabulary list: a name, slug or synonym matches whatever its case, spacing and
+ * punctuation (an entry's own name wins over another's synonym). `closest` suggests the nearest entry in
+ * use for a misspelling (edit distance up to a quarter of the length, at least 2).
  */
 export class VocabularyIndex {
   private readonly bySlug = new Map<string, VocabularyEntry>();
@@ -27,9 +31,17 @@ export class VocabularyIndex {
   constructor(entries: readonly VocabularyEntry[]) {
     this.entries = entries;
     for (const entry of entries) {
+      for (const synonym of entry.synonyms ?? []) this.bySlug.set(slugify(synonym), entry);
+    }
+    for (const entry of entries) {
       this.bySlug.set(slugify(entry.slug), entry);
       this.bySlug.set(slugify(entry.name), entry);
     }
+  }
+
+  /** The entries that take new uploads. */
+  get inUse(): readonly VocabularyEntry[] {
+    return this.entries.filter((entry) => !entry.retired);
   }
 
   find(text: string): VocabularyEntry | null {
@@ -42,7 +54,7 @@ export class VocabularyIndex {
     if (slug.length === 0 || slug.length > 200) return null;
     let best: VocabularyEntry | null = null;
     let bestDistance = Math.max(2, Math.floor(slug.length / 4)) + 1;
-    for (const entry of this.entries) {
+    for (const entry of this.inUse) {
       const d = editDistance(slug, slugify(entry.name));
       if (d < bestDistance) {
         best = entry;

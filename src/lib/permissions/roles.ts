@@ -13,13 +13,15 @@ export type FirmRole = (typeof FIRM_ROLES)[number];
 export const ASSIGNABLE_FIRM_ROLES = ['admin', 'engineer', 'estimator', 'contributor'] as const satisfies readonly FirmRole[];
 
 export const STATEMENT = {
-  bank: ['browse', 'statistics'],
+  bank: ['browse', 'statistics', 'versions'],
   record: ['read-private'],
   submission: ['create', 'read', 'review'],
   estimate: ['create', 'read'],
   vocabulary: ['manage'],
   firm: ['manage-members', 'manage-api-keys', 'read-audit'],
   audit: ['read-all'],
+  people: ['manage'],
+  settings: ['manage'],
 } as const;
 
 export type Resource = keyof typeof STATEMENT;
@@ -64,11 +66,17 @@ export const FIRM_ROLE_GRANTS: Record<FirmRole, Grants> = {
 /** Grants of a platform role: `everywhere` needs no firm; `inOwnFirm` applies inside the person's active firm. */
 export const PLATFORM_ROLE_GRANTS: Record<PlatformRole, { everywhere: Grants; inOwnFirm: Grants }> = {
   admin: {
-    everywhere: { bank: ['browse', 'statistics'], vocabulary: ['manage'], audit: ['read-all'] },
+    everywhere: {
+      bank: ['browse', 'statistics', 'versions'],
+      vocabulary: ['manage'],
+      audit: ['read-all'],
+      people: ['manage'],
+      settings: ['manage'],
+    },
     inOwnFirm: { record: ['read-private'], submission: ['create', 'read'], estimate: ['create', 'read'] },
   },
   steward: {
-    everywhere: { bank: ['browse', 'statistics'], submission: ['review'], vocabulary: ['manage'] },
+    everywhere: { bank: ['browse', 'statistics', 'versions'], submission: ['review'], vocabulary: ['manage'] },
     inOwnFirm: {},
   },
   user: { everywhere: {}, inOwnFirm: {} },

@@ -40,3 +40,16 @@ export type CreateRegionInput = z.infer<typeof createRegionSchema>;
 export type UpdateRegionInput = z.infer<typeof updateRegionSchema>;
 export type CreateUnitInput = z.infer<typeof createUnitSchema>;
 export type UpdateUnitInput = z.infer<typeof updateUnitSchema>;
+
+/** Merges the unit in the address into another: its records move there and its names become synonyms. */
+export const mergeUnitSchema = z.strictObject({
+  intoUnitId: z.uuid({ error: 'Choose the geological unit to merge into from the list.' }),
+});
+
+/** Retires an entry (`true`: no new uploads) or puts it back in use (`false`). */
+export const retireSchema = z.strictObject({
+  retired: z.boolean({ error: 'Say true to retire it or false to put it back in use.' }),
+});
+
+export type MergeUnitInput = z.infer<typeof mergeUnitSchema>;
+export type RetireInput = z.infer<typeof retireSchema>;

@@ -95,6 +95,21 @@ const EXPECTED: Record<string, Row> = {
     platform: { admin: 'yes', steward: 'no', user: 'no' },
     firm: { owner: 'no', admin: 'no', engineer: 'no', estimator: 'no', contributor: 'no' },
   },
+  'bank:versions': {
+    capability: 'list the bank versions (who published what, when)',
+    platform: { admin: 'yes', steward: 'yes', user: 'no' },
+    firm: { owner: 'no', admin: 'no', engineer: 'no', estimator: 'no', contributor: 'no' },
+  },
+  'people:manage': {
+    capability: 'list people and firms, suspend a person, pass a firm to a new owner',
+    platform: { admin: 'yes', steward: 'no', user: 'no' },
+    firm: { owner: 'no', admin: 'no', engineer: 'no', estimator: 'no', contributor: 'no' },
+  },
+  'settings:manage': {
+    capability: 'change bank-wide settings (the disclosure thresholds)',
+    platform: { admin: 'yes', steward: 'no', user: 'no' },
+    firm: { owner: 'no', admin: 'no', engineer: 'no', estimator: 'no', contributor: 'no' },
+  },
 };
 
 const PERMISSIONS = (Object.keys(STATEMENT) as Resource[]).flatMap((resource) =>

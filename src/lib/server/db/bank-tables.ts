@@ -43,6 +43,8 @@ export interface RegionTable {
   name: string;
   slug: string;
   description: string | null;
+  synonyms: Generated<string[]>;
+  retired_at: NullableTimestamp;
   created_by: string | null;
   created_at: Timestamp;
   updated_at: Timestamp;
@@ -56,6 +58,9 @@ export interface GeologicalUnitTable {
   genesis: Genesis;
   age: string | null;
   typical_region_id: string | null;
+  synonyms: Generated<string[]>;
+  retired_at: NullableTimestamp;
+  merged_into_id: string | null;
   created_by: string | null;
   created_at: Timestamp;
   updated_at: Timestamp;

@@ -5,7 +5,7 @@ import type { AppServices } from '../app-services';
 import type { ActingPerson } from '../audit/acting-person';
 import type { Database } from '../db/schema';
 import { InvalidInputError, NotFoundError } from '../errors';
-import { auditCuration, inCatalogue, uniqueName } from './catalogue';
+import { assertNameFree, auditCuration, inCatalogue, synonymsAfterRename, uniqueName } from './catalogue';
 import { findRegion, findUnit, insertUnit, updateUnitRow } from './vocabulary-repository';
 
 async function assertRegionExists(trx: Transaction<Database>, regionId: string | null | undefined) {
@@ -22,6 +22,7 @@ export async function createUnit(
 ): Promise<GeologicalUnit> {
   return uniqueName('geological unit', input.name, () =>
     inCatalogue(app, async (trx) => {
+      await assertNameFree(trx, 'geological_unit', 'geological unit', input.name, null);
       await assertRegionExists(trx, input.typicalRegionId);
       const unit = await insertUnit(trx, {
         name: input.name,
@@ -48,15 +49,19 @@ export async function updateUnit(
     inCatalogue(app, async (trx) => {
       const before = await findUnit(trx, id);
       if (!before) throw new NotFoundError('There is no such geological unit.');
+      const renamed = input.name !== undefined && input.name !== before.name;
+      if (renamed) await assertNameFree(trx, 'geological_unit', 'geological unit', input.name as string, id);
       await assertRegionExists(trx, input.typicalRegionId);
       const after = await updateUnitRow(trx, id, {
-        ...(input.name ? { name: input.name, slug: slugify(input.name) } : {}),
+        ...(renamed && input.name
+          ? { name: input.name, slug: slugify(input.name), synonyms: synonymsAfterRename(before, input.name) }
+          : {}),
         ...(input.description !== undefined ? { description: input.description } : {}),
         ...(input.genesis ? { genesis: input.genesis } : {}),
         ...(input.age !== undefined ? { age: input.age } : {}),
         ...(input.typicalRegionId !== undefined ? { typical_region_id: input.typicalRegionId } : {}),
       });
-      await auditCuration(trx, curator, 'unit_updated', id, { before, after });
+      await auditCuration(trx, curator, renamed ? 'unit_renamed' : 'unit_updated', id, { before, after });
       return after;
     }),
   );

@@ -3,7 +3,7 @@ import { slugify } from '../../import/vocabulary-match';
 import type { AppServices } from '../app-services';
 import type { ActingPerson } from '../audit/acting-person';
 import { NotFoundError } from '../errors';
-import { auditCuration, inCatalogue, uniqueName } from './catalogue';
+import { assertNameFree, auditCuration, inCatalogue, synonymsAfterRename, uniqueName } from './catalogue';
 import {
   findRegion,
   insertRegion,
@@ -30,6 +30,7 @@ export async function createRegion(
 ): Promise<Region> {
   return uniqueName('region', input.name, () =>
     inCatalogue(app, async (trx) => {
+      await assertNameFree(trx, 'region', 'region', input.name, null);
       const region = await insertRegion(trx, {
         name: input.name,
         slug: slugify(input.name),
@@ -52,11 +53,15 @@ export async function updateRegion(
     inCatalogue(app, async (trx) => {
       const before = await findRegion(trx, id);
       if (!before) throw new NotFoundError('There is no such region.');
+      const renamed = input.name !== undefined && input.name !== before.name;
+      if (renamed) await assertNameFree(trx, 'region', 'region', input.name as string, id);
       const after = await updateRegionRow(trx, id, {
-        ...(input.name ? { name: input.name, slug: slugify(input.name) } : {}),
+        ...(renamed && input.name
+          ? { name: input.name, slug: slugify(input.name), synonyms: synonymsAfterRename(before, input.name) }
+          : {}),
         ...(input.description !== undefined ? { description: input.description } : {}),
       });
-      await auditCuration(trx, curator, 'region_updated', id, { before, after });
+      await auditCuration(trx, curator, renamed ? 'region_renamed' : 'region_updated', id, { before, after });
       return after;
     }),
   );
