@@ -5,4 +5,7 @@ export const prerender = false;
 
 /** Any API path that no endpoint serves answers in the one error shape. */
 export const ALL: APIRoute = ({ url }) =>
-  errorResponse('NOT_FOUND', `There is no API endpoint at ${url.pathname}. The README's API section lists them.`);
+  errorResponse(
+    'NOT_FOUND',
+    `There is no API endpoint at ${url.pathname}. The API page (/api-guide) and GET /api/openapi.json list them.`,
+  );

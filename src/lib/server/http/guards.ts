@@ -6,11 +6,25 @@ import { ApiError } from './api-error';
 
 type Context = Pick<APIContext, 'locals' | 'request' | 'url' | 'clientAddress'>;
 
-/** 401 unless someone is signed in. */
+/** True when the request carries a firm API key rather than (or besides) a session. */
+function carriesApiKey(request: Request): boolean {
+  return request.headers.has('x-api-key') || /^Bearer\s+cbk_/i.test(request.headers.get('authorization') ?? '');
+}
+
+/**
+ * 401 unless someone is signed in. A firm API key sent here is named for what it is: keys work only on
+ * the partner endpoints.
+ */
 export function requireIdentity(context: Context): ResolvedIdentity {
   const identity = context.locals.identity;
-  if (!identity) throw new ApiError('UNAUTHENTICATED', 'Sign in first; your session may have expired.');
-  return identity;
+  if (identity) return identity;
+  if (carriesApiKey(context.request)) {
+    throw new ApiError(
+      'UNAUTHENTICATED',
+      `${context.request.method} ${context.url.pathname} needs a signed-in session; a firm API key is accepted only by the partner endpoints: POST /api/partner/submissions (upload test records) and GET /api/partner/whoami. The API page (/api-guide) and GET /api/openapi.json describe them.`,
+    );
+  }
+  throw new ApiError('UNAUTHENTICATED', 'Sign in first; your session may have expired.');
 }
 
 /** Records a refused request in the audit log. */

@@ -8,7 +8,10 @@ export const prerender = false;
 /** Messages held by the local mail fake. Exists only in development mode. */
 export const GET = handleApi(async () => {
   if (!config.isDevelopment || !config.mailInboxUrl) {
-    throw new ApiError('NOT_FOUND', "There is no API endpoint at /api/dev/inbox. The README's API section lists them.");
+    throw new ApiError(
+      'NOT_FOUND',
+      'There is no API endpoint at /api/dev/inbox. The API page (/api-guide) and GET /api/openapi.json list them.',
+    );
   }
   try {
     return json({ messages: await readDevInbox(config.mailInboxUrl) });
