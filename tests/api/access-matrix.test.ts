@@ -608,6 +608,107 @@ const MATRIX: Record<string, Case[]> = {
   ],
 };
 
+/** A new unit through the API, as the steward makes one. */
+async function freshUnit(label: string): Promise<string> {
+  const made = await call('POST', '/api/vocabulary/units', cookies.steward, {
+    name: `Matrix ${label} ${Math.random().toString(36).slice(2, 8)}`,
+    genesis: 'alluvial',
+  });
+  return String((asObject(made).unit as { id: string }).id);
+}
+
+/** A new firm with an owner and one engineer; returns the firm and the engineer's member id. */
+async function freshFirm(): Promise<{ firmId: string; memberId: string }> {
+  const owner = await makePerson('matrix-owner');
+  const made = await call('POST', '/api/firms', await sessionCookie(owner.id), {
+    name: `Matrix firm ${Math.random().toString(36).slice(2, 7)}`,
+  });
+  const firmId = String((asObject(made).firm as { id: string }).id);
+  const engineer = await makePerson('matrix-engineer', { id: firmId, role: 'engineer' });
+  const member = await db.selectFrom('member').select('id').where('userId', '=', engineer.id).executeTakeFirstOrThrow();
+  return { firmId, memberId: member.id };
+}
+
+const adminOnly = (ok: Expectation) => everyone(403, { anon: 401, platformAdmin: ok });
+const curatorsOnly = (ok: Expectation) => everyone(403, { anon: 401, platformAdmin: ok, steward: ok });
+
+// The admin area, the vocabulary's curation and the API description.
+Object.assign(MATRIX, {
+  'GET /api/openapi.json': [{ context: 'public description', request: get(() => '/api/openapi.json'), expect: everyone(200) }],
+  'GET /api/admin/vocabulary': [
+    { context: 'shared vocabulary with counts', request: get(() => '/api/admin/vocabulary'), expect: curatorsOnly(200) },
+  ],
+  'POST /api/vocabulary/regions/:id/retirement': [
+    {
+      context: 'keep a region in use',
+      request: () => ({ method: 'POST', path: `/api/vocabulary/regions/${regionId}/retirement`, body: { retired: false } }),
+      expect: curatorsOnly(200),
+    },
+  ],
+  'POST /api/vocabulary/units/:id/retirement': [
+    {
+      context: 'keep a unit in use',
+      request: () => ({ method: 'POST', path: `/api/vocabulary/units/${unitId}/retirement`, body: { retired: false } }),
+      expect: curatorsOnly(200),
+    },
+  ],
+  'POST /api/vocabulary/units/:id/merge': [
+    {
+      context: 'two fresh units',
+      request: async () => ({
+        method: 'POST',
+        path: `/api/vocabulary/units/${await freshUnit('merged')}/merge`,
+        body: { intoUnitId: await freshUnit('survivor') },
+      }),
+      expect: curatorsOnly(200),
+    },
+  ],
+  'GET /api/admin/people': [
+    {
+      context: 'everyone, searched',
+      request: get(() => '/api/admin/people?q=example.test&limit=100'),
+      expect: adminOnly({ status: 200, check: (r) => expect(Number(asObject(r).total)).toBeGreaterThan(5) }),
+    },
+  ],
+  'POST /api/admin/people/:id/suspension': [
+    {
+      context: 'a fresh person',
+      request: async () => ({
+        method: 'POST',
+        path: `/api/admin/people/${(await makePerson('matrix-suspended')).id}/suspension`,
+        body: { suspended: true, reason: 'Access matrix check.' },
+      }),
+      expect: adminOnly(200),
+    },
+  ],
+  'GET /api/admin/firms': [{ context: 'every firm', request: get(() => '/api/admin/firms?limit=100'), expect: adminOnly(200) }],
+  'POST /api/admin/firms/:id/ownership': [
+    {
+      context: 'a fresh firm',
+      request: async () => {
+        const firm = await freshFirm();
+        return { method: 'POST', path: `/api/admin/firms/${firm.firmId}/ownership`, body: { newOwnerMemberId: firm.memberId } };
+      },
+      expect: adminOnly(200),
+    },
+  ],
+  'GET /api/admin/bank-versions': [
+    { context: 'published versions', request: get(() => '/api/admin/bank-versions'), expect: curatorsOnly(200) },
+  ],
+  'GET /api/admin/settings': [{ context: 'bank-wide', request: get(() => '/api/admin/settings'), expect: adminOnly(200) }],
+  'PUT /api/admin/settings/disclosure-rule': [
+    {
+      context: 'the default rule again',
+      request: () => ({
+        method: 'PUT',
+        path: '/api/admin/settings/disclosure-rule',
+        body: { minTests: 5, minFirms: 2, maxFirmSharePct: 75 },
+      }),
+      expect: adminOnly(200),
+    },
+  ],
+} satisfies Record<string, Case[]>);
+
 const signedInPage = (path: string) =>
   everyone(200, { anon: { status: 302, check: (r) => expect(r.location).toBe(`/sign-in?next=${path}`) } });
 const PAGES: Record<string, string> = {
@@ -630,6 +731,13 @@ const PAGES: Record<string, string> = {
   'PAGE /audit': '/audit',
   'PAGE /contribute/submissions/:id': '/contribute/submissions/SUBMISSION_A',
   'PAGE /review/:id': '/review/SUBMISSION_A',
+  'PAGE /admin': '/admin',
+  'PAGE /admin/vocabulary': '/admin/vocabulary',
+  'PAGE /admin/people': '/admin/people',
+  'PAGE /admin/firms': '/admin/firms',
+  'PAGE /admin/versions': '/admin/versions',
+  'PAGE /admin/settings': '/admin/settings',
+  'PAGE /api-guide': '/api-guide',
 };
 const signedOutPage = everyone({ status: 302 }, { anon: 200 });
 const PAGE_EXPECTATIONS: Record<string, Record<Role, Expectation>> = {
@@ -642,6 +750,12 @@ const PAGE_EXPECTATIONS: Record<string, Record<Role, Expectation>> = {
   'PAGE /invitations/:id': signedInPage('/invitations/unknown-invitation'),
   'PAGE /contribute': signedInPage('/contribute'),
   'PAGE /review': signedInPage('/review'),
+  'PAGE /admin': signedInPage('/admin'),
+  'PAGE /admin/vocabulary': signedInPage('/admin/vocabulary'),
+  'PAGE /admin/people': signedInPage('/admin/people'),
+  'PAGE /admin/firms': signedInPage('/admin/firms'),
+  'PAGE /admin/versions': signedInPage('/admin/versions'),
+  'PAGE /admin/settings': signedInPage('/admin/settings'),
   'PAGE /audit': everyone(
     { status: 200, privateMarkersOnly: true },
     { anon: { status: 302, check: (r) => expect(r.location).toBe('/sign-in?next=/audit') } },
