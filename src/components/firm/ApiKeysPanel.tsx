@@ -8,6 +8,7 @@ import TextField from '../account/TextField';
 import { useSchemaForm } from '../account/use-schema-form';
 import ConfirmButton from './ConfirmButton';
 import { formatDate } from './format-date';
+import KeyUsage from './KeyUsage';
 import NewKeySecret from './NewKeySecret';
 import { PANEL_TABLE_CLASS } from './panel-table';
 
@@ -51,7 +52,7 @@ export default function ApiKeysPanel() {
         <h2 id="api-keys-heading">API keys</h2>
         <p className="text-xs text-ink-500">
           For your firm's upload scripts. A key can create submissions for this firm and nothing else. Revoke a key as soon as a
-          script no longer needs it.
+          script no longer needs it. <a href="/api-guide">How partner uploads work</a>.
         </p>
       </div>
       <form className="flex flex-wrap items-start gap-3 px-4 py-3" onSubmit={onSubmit} noValidate data-testid="api-key-form">
@@ -116,6 +117,7 @@ export default function ApiKeysPanel() {
           </table>
         </div>
       )}
+      <KeyUsage keyStart={state.kind === 'loaded' ? (state.keys.find((k) => k.enabled)?.start ?? null) : null} />
     </section>
   );
 }

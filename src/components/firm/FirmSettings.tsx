@@ -47,7 +47,14 @@ export default function FirmSettings({ currentUserId, firmName, myRole, canManag
           {canManageMembers && <InvitePanel invitations={state.overview.invitations} onChanged={load} />}
         </>
       )}
-      {canManageApiKeys && <ApiKeysPanel />}
+      {canManageApiKeys ? (
+        <ApiKeysPanel />
+      ) : (
+        <p className="text-sm text-ink-600" data-testid="api-keys-elsewhere">
+          API keys for your firm's upload scripts are created by its owner and admins. How scripts use them:{' '}
+          <a href="/api-guide">the API page</a>.
+        </p>
+      )}
       <LeaveFirmPanel firmName={firmName} isOwner={myRole === 'owner'} />
     </div>
   );

@@ -96,7 +96,7 @@ export default function IdentityMenu({ person, firms, activeFirmId }: IdentityMe
           <span className="text-white">{activeFirm.firmName}</span> · {FIRM_ROLE_LABELS[activeFirm.role]}
         </span>
       )}
-      {firms.length === 0 && (
+      {firms.length === 0 && person.platformRole === 'user' && (
         <a href="/firm/new" className="text-ink-200 hover:text-white" data-testid="no-firm">
           No firm yet
         </a>

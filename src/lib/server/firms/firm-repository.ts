@@ -93,3 +93,16 @@ export async function findFirmApiKey(trx: Transaction<Database>, firmId: string,
     .where('referenceId', '=', firmId)
     .executeTakeFirst();
 }
+
+/** Invitations still open for an e-mail address, with the inviting firm's name. */
+export async function openInvitationsFor(trx: Transaction<Database>, email: string) {
+  return trx
+    .selectFrom('invitation')
+    .innerJoin('organization', 'organization.id', 'invitation.organizationId')
+    .select(['invitation.id', 'invitation.role', 'invitation.expiresAt', 'organization.name as firmName'])
+    .where((eb) => eb(eb.fn('lower', ['invitation.email']), '=', email.toLowerCase()))
+    .where('invitation.status', '=', 'pending')
+    .where('invitation.expiresAt', '>', new Date())
+    .orderBy('invitation.createdAt', 'desc')
+    .execute();
+}
