@@ -7,11 +7,16 @@ import { routeInventory } from './support/route-inventory';
 import { call, db, sessionCookie, userIdOf } from './support/world';
 
 /** Who may reach each route's id check (the permission check comes first). */
-const ACTOR: Record<string, 'owner' | 'steward'> = {
+const ACTOR: Record<string, 'owner' | 'steward' | 'admin'> = {
   '/api/review/:id': 'steward',
   '/api/review/:id/decision': 'steward',
   '/api/vocabulary/regions/:id': 'steward',
   '/api/vocabulary/units/:id': 'steward',
+  '/api/vocabulary/regions/:id/retirement': 'steward',
+  '/api/vocabulary/units/:id/retirement': 'steward',
+  '/api/vocabulary/units/:id/merge': 'admin',
+  '/api/admin/people/:id/suspension': 'admin',
+  '/api/admin/firms/:id/ownership': 'admin',
 };
 
 /** A body that fits each write route, so only the id can be at fault. */
@@ -21,6 +26,11 @@ const BODY: Record<string, unknown> = {
   'PATCH /api/submissions/:id/records/:recordId': { values: { notes: 'checked' } },
   'PATCH /api/vocabulary/regions/:id': { description: 'checked' },
   'PATCH /api/vocabulary/units/:id': { description: 'checked' },
+  'POST /api/vocabulary/regions/:id/retirement': { retired: false },
+  'POST /api/vocabulary/units/:id/retirement': { retired: false },
+  'POST /api/vocabulary/units/:id/merge': { intoUnitId: '0190a8a0-1234-7abc-8def-0123456789ac' },
+  'POST /api/admin/people/:id/suspension': { suspended: false },
+  'POST /api/admin/firms/:id/ownership': { newOwnerMemberId: 'AbCdEfGhIjKlMnOpQrStUvWxYz012346' },
 };
 
 const MALFORMED: [label: string, segment: string][] = [
@@ -41,13 +51,15 @@ const AUTH_ID_ROUTES = new Set([
   '/api/invitations/:id',
   '/api/invitations/:id/accept',
   '/api/invitations/:id/reject',
+  '/api/admin/people/:id/suspension',
+  '/api/admin/firms/:id/ownership',
 ]);
 
 const routes = routeInventory()
   .filter((route) => !route.startsWith('PAGE ') && !route.startsWith('ALL '))
   .filter((route) => /\/:\w+/.test(route));
 
-const cookies = { owner: '', steward: '' };
+const cookies = { owner: '', steward: '', admin: '' };
 let before: Record<string, number> = {};
 
 const COUNTED = [
@@ -78,6 +90,7 @@ async function counts(): Promise<Record<string, number>> {
 beforeAll(async () => {
   cookies.owner = await sessionCookie(await userIdOf('owner@quillfen.example.test'));
   cookies.steward = await sessionCookie(await userIdOf('steward@example.test'));
+  cookies.admin = await sessionCookie(await userIdOf('admin@example.test'));
   before = await counts();
 });
 

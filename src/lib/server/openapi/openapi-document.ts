@@ -1,7 +1,6 @@
 import { OpenAPIRegistry, OpenApiGeneratorV3, type RouteConfig } from '@asteasolutions/zod-to-openapi';
 import { z } from 'zod';
 import { ERROR_STATUS } from '../../contracts/errors';
-import { uploadOptionsSchema } from '../../schemas/upload-options';
 import type { DocumentedRoute } from './documented-route';
 import { ACCOUNT_ROUTES } from './routes-account';
 import { ADMIN_ROUTES } from './routes-admin';
@@ -10,13 +9,15 @@ import { BANK_ROUTES } from './routes-bank';
 /** Every endpoint the description documents, in the order the API page shows them. */
 export const DOCUMENTED_ROUTES: readonly DocumentedRoute[] = [...BANK_ROUTES, ...ACCOUNT_ROUTES, ...ADMIN_ROUTES];
 
-const errorBodySchema = z.object({
-  error: z.object({
-    code: z.enum(Object.keys(ERROR_STATUS) as [keyof typeof ERROR_STATUS]),
-    message: z.string().meta({ description: 'What happened and what to do.' }),
-    issues: z.array(z.object({ path: z.string(), message: z.string() })).optional(),
-  }),
-});
+const errorBodySchema = z
+  .object({
+    error: z.object({
+      code: z.enum(Object.keys(ERROR_STATUS) as [keyof typeof ERROR_STATUS]),
+      message: z.string().meta({ description: 'What happened and what to do.' }),
+      issues: z.array(z.object({ path: z.string(), message: z.string() })).optional(),
+    }),
+  })
+  .meta({ id: 'ErrorBody' });
 
 const SECURITY: Record<DocumentedRoute['caller'], RouteConfig['security']> = {
   anyone: [],
@@ -24,10 +25,10 @@ const SECURITY: Record<DocumentedRoute['caller'], RouteConfig['security']> = {
   apiKey: [{ firmKey: [] }],
 };
 
-function routeConfig(route: DocumentedRoute, errorBody: z.ZodType): RouteConfig {
+function routeConfig(route: DocumentedRoute): RouteConfig {
   const error = {
     description: 'The one error shape; see the code and message.',
-    content: { 'application/json': { schema: errorBody } },
+    content: { 'application/json': { schema: errorBodySchema } },
   };
   return {
     method: route.method,
@@ -59,11 +60,9 @@ function routeConfig(route: DocumentedRoute, errorBody: z.ZodType): RouteConfig 
 /** The OpenAPI 3.0 description of the API, built from the endpoints' own zod schemas. */
 export function buildOpenApiDocument(appUrl: string) {
   const registry = new OpenAPIRegistry();
-  const errorBody = registry.register('ErrorBody', errorBodySchema);
-  registry.register('UploadOptions', uploadOptionsSchema);
   registry.registerComponent('securitySchemes', 'session', { type: 'apiKey', in: 'cookie', name: 'better-auth.session_token' });
   registry.registerComponent('securitySchemes', 'firmKey', { type: 'apiKey', in: 'header', name: 'x-api-key' });
-  for (const route of DOCUMENTED_ROUTES) registry.registerPath(routeConfig(route, errorBody));
+  for (const route of DOCUMENTED_ROUTES) registry.registerPath(routeConfig(route));
   return new OpenApiGeneratorV3(registry.definitions).generateDocument({
     openapi: '3.0.3',
     info: {

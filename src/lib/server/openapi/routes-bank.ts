@@ -16,8 +16,9 @@ const estimateRoles = 'firm owner, admin, engineer or estimator';
 /** A multipart upload: the file, and the reading choices as JSON text in `options` (schema UploadOptions). */
 export const multipartUpload = z.object({
   file: z.string().meta({ format: 'binary', description: 'The CSV or AGS4 file.' }),
-  options: z.string().optional().meta({
-    description: 'JSON text of an UploadOptions object: format, delimiter, mapping, units, edits, region, geologyMap, remember.',
+  options: uploadOptionsSchema.optional().meta({
+    id: 'UploadOptions',
+    description: 'How to read the file, sent as JSON text in this form field.',
   }),
 });
 
@@ -251,5 +252,3 @@ export const BANK_ROUTES: DocumentedRoute[] = [
     success: { status: 200, description: 'The OpenAPI document.' },
   },
 ];
-
-export { uploadOptionsSchema };
