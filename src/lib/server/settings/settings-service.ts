@@ -1,13 +1,14 @@
 import type { Transaction } from 'kysely';
 import type { BankSettings, SettingState } from '../../contracts/settings';
 import { APP_SETTINGS, type AppSettingKey, type DisclosureRuleSetting } from '../../schemas/app-settings';
+import type { DisclosureRule } from '../../statistics';
 import type { AppServices } from '../app-services';
 import type { ActingPerson } from '../audit/acting-person';
 import { auditedBy } from '../audit/audit-log';
 import { insertAuditEntry } from '../audit/audit-repository';
 import type { Database } from '../db/schema';
 import { inTenantTransaction, NO_TENANT } from '../tenancy/tenant-transaction';
-import { findSetting, upsertSetting } from './settings-repository';
+import { findSetting, findSettingValue, upsertSetting } from './settings-repository';
 
 type SettingValue<K extends AppSettingKey> = (typeof APP_SETTINGS)[K]['defaultValue'];
 
@@ -26,9 +27,21 @@ export async function settingState<K extends AppSettingKey>(
   return { value: parsed.data as SettingValue<K>, isDefault: false, defaultValue, updatedAt: row.updatedAt };
 }
 
-/** The disclosure rule in force (the statistics obey it). */
-export async function readDisclosureRule(app: Pick<AppServices, 'db'>): Promise<DisclosureRuleSetting> {
-  return (await inTenantTransaction(app.db, NO_TENANT, (trx) => settingState(trx, 'disclosure_rule'))).value;
+/**
+ * The bank-wide disclosure rule in the statistics core's terms. A missing row means the default; a
+ * stored value that no longer fits the schema (edited by hand) also falls back to the default, with a
+ * line in the server log, so that a bad row never opens the pool wider than intended.
+ */
+export async function readDisclosureRule(trx: Transaction<Database>): Promise<DisclosureRule> {
+  const { schema, defaultValue } = APP_SETTINGS.disclosure_rule;
+  const stored = await findSettingValue(trx, 'disclosure_rule');
+  let setting: DisclosureRuleSetting = defaultValue;
+  if (stored !== undefined) {
+    const parsed = schema.safeParse(stored);
+    if (parsed.success) setting = parsed.data;
+    else console.error('[settings] disclosure_rule does not fit its schema; using the default rule.');
+  }
+  return { minTests: setting.minTests, minFirms: setting.minFirms, maxFirmShare: setting.maxFirmSharePct / 100 };
 }
 
 /** Every bank-wide setting, for the admin area. */
