@@ -1,6 +1,7 @@
 import type { TestRecordIncrement, TestRecordRow } from '../schemas/test-record-row';
 import { fieldName, fieldUnitLabel } from './field-labels';
 import { FIELD_BY_KEY, IMPORT_FIELDS } from './fields';
+import { formulaFlagReason } from './formula-text';
 import { identifyingReasons, type PrivateValue } from './identifying-text';
 import { formatValue } from './row-ranges';
 import { SAMPLE_QUALITY_LABELS } from './sample-quality';
@@ -23,7 +24,10 @@ export interface PrivatePart {
 /** What enters the shared bank: shared-scope fields, the coarse location cell, derived values and increments. */
 export type SharedPart = Omit<TestRecordRow, keyof PrivatePart | 'derived'> & { increments: TestRecordIncrement[] };
 
-/** Shared free text that may identify the firm's project or site, for the data steward to look at. */
+/**
+ * Shared free text for the data steward to look at: text that may identify the firm's project or site,
+ * and text a spreadsheet may run as a formula.
+ */
 export interface AnonymityFlag {
   field: string;
   reason: string;
@@ -82,6 +86,8 @@ export function splitRow(validRow: ValidRow): { shared: SharedPart; private: Pri
     if (typeof text !== 'string') continue;
     for (const reason of identifyingReasons(text, privateValues))
       flags.push({ field: key, reason: `${FIELD_BY_KEY.get(key)?.label} ${reason}.` });
+    const formula = formulaFlagReason(FIELD_BY_KEY.get(key)?.label ?? key, text);
+    if (formula) flags.push({ field: key, reason: formula });
   }
   return { shared: { ...sharedFields, increments: validRow.increments }, private: privatePart, flags };
 }

@@ -20,6 +20,7 @@ export {
   type RowError,
 } from './errors';
 export { FIELD_BY_KEY, IMPORT_FIELDS, type ImportField, type ImportFieldKey } from './fields';
+export { formulaFlagReason, looksLikeFormula, neutraliseCell } from './formula-text';
 export { rememberKey } from './header-text';
 export { MAX_FILE_BYTES, MAX_ROWS } from './limits';
 export { LOCATION_CELL_PATTERN, locationCellFromCoordinates } from './location-cell';
