@@ -2,10 +2,12 @@ import { createHash } from 'node:crypto';
 import { IMPORT_ERROR_HTTP_STATUS, type ImportError, MAX_FILE_BYTES } from '../../import';
 import { type UploadOptions, uploadOptionsSchema } from '../../schemas/upload-options';
 import { ApiError } from '../http/api-error';
+import { parseJsonText, readBodyBytes, requireStorableText } from '../http/read-body';
 import { issuesFromZod } from '../http/respond';
 
 /** Room for the form's other fields and boundaries around the file itself. */
 const MULTIPART_OVERHEAD_BYTES = 1024 * 1024;
+const UPLOAD_FORM_FIELDS = new Set(['file', 'options']);
 
 export interface UploadRequest {
   bytes: Uint8Array;
@@ -19,8 +21,11 @@ export function sha256Of(bytes: Uint8Array): string {
   return createHash('sha256').update(bytes).digest('hex');
 }
 
+/** The most an upload request may weigh: one file at the limit and the form around it. */
+export const MAX_UPLOAD_BYTES = MAX_FILE_BYTES + MULTIPART_OVERHEAD_BYTES;
+
 /** 413 before reading a body that is announced as too large. */
-export function refuseOversizedBody(request: Request, limitBytes = MAX_FILE_BYTES + MULTIPART_OVERHEAD_BYTES): void {
+export function refuseOversizedBody(request: Request, limitBytes = MAX_UPLOAD_BYTES): void {
   const length = Number(request.headers.get('content-length') ?? '0');
   if (length > limitBytes) {
     throw new ApiError(
@@ -39,11 +44,23 @@ export async function readUploadRequest(request: Request): Promise<UploadRequest
     );
   }
   refuseOversizedBody(request);
+  const body = await readBodyBytes(request, MAX_UPLOAD_BYTES);
   let form: FormData;
   try {
-    form = await request.formData();
+    form = await new Response(body, { headers: { 'content-type': request.headers.get('content-type') ?? '' } }).formData();
   } catch {
     throw new ApiError('BAD_REQUEST', 'The upload could not be read as a form. Send multipart/form-data with a "file" field.');
+  }
+  const unknownFields = [...new Set(form.keys())].filter((name) => !UPLOAD_FORM_FIELDS.has(name));
+  if (unknownFields.length > 0) {
+    throw new ApiError(
+      'VALIDATION_FAILED',
+      'The upload form has fields it does not use; see issues.',
+      unknownFields.map((name) => ({
+        path: name,
+        message: `"${name}" is not part of an upload. Send only "file" and "options".`,
+      })),
+    );
   }
   const file = form.get('file');
   if (!(file instanceof File))
@@ -58,11 +75,13 @@ export async function readUploadRequest(request: Request): Promise<UploadRequest
   const optionsText = form.get('options');
   if (typeof optionsText === 'string' && optionsText.trim() !== '') {
     try {
-      rawOptions = JSON.parse(optionsText);
-    } catch {
-      throw new ApiError('VALIDATION_FAILED', 'The upload options are not valid JSON.', [
-        { path: 'options', message: 'Send the options as a JSON object.' },
-      ]);
+      rawOptions = parseJsonText(optionsText);
+    } catch (error) {
+      if (!(error instanceof ApiError)) throw error;
+      const issues = error.issues?.map((i) => ({ ...i, path: `options.${i.path}` })) ?? [
+        { path: 'options', message: error.message },
+      ];
+      throw new ApiError(error.code, 'The upload options cannot be used; see issues.', issues);
     }
   }
   const parsed = uploadOptionsSchema.safeParse(rawOptions);
@@ -75,7 +94,7 @@ export async function readUploadRequest(request: Request): Promise<UploadRequest
   const bytes = new Uint8Array(await file.arrayBuffer());
   return {
     bytes,
-    fileName: file.name || null,
+    fileName: requireStorableText(file.name || null, 'file'),
     mediaType: file.type || 'application/octet-stream',
     sha256: sha256Of(bytes),
     options: parsed.data,

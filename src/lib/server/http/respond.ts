@@ -1,6 +1,7 @@
 import type { APIContext, APIRoute } from 'astro';
 import type { z } from 'zod';
 import { ApiError, ERROR_STATUS, type ErrorBody, type ErrorCode, type FieldIssue } from './api-error';
+import { BODY_LIMIT_BYTES, readJsonValue } from './read-body';
 
 const NO_STORE = { 'cache-control': 'no-store' };
 
@@ -45,18 +46,16 @@ export function handleApi(handler: (context: APIContext) => Promise<Response> | 
   };
 }
 
-/** Reads a JSON body and validates it; throws ApiError (400) with per-field issues when it does not fit. */
-export async function readJsonBody<T extends z.ZodType>(request: Request, schema: T): Promise<z.infer<T>> {
-  const type = request.headers.get('content-type') ?? '';
-  if (!type.toLowerCase().includes('application/json')) {
-    throw new ApiError('UNSUPPORTED_MEDIA_TYPE', 'Send the body as JSON with the header Content-Type: application/json.');
-  }
-  let raw: unknown;
-  try {
-    raw = await request.json();
-  } catch {
-    throw new ApiError('BAD_REQUEST', 'The request body is not valid JSON. Check for a missing comma, quote or bracket.');
-  }
+/**
+ * Reads a JSON body within `limitBytes` (413 above it; see read-body.ts for the other refusals) and
+ * validates it; throws ApiError (400) with per-field issues when it does not fit.
+ */
+export async function readJsonBody<T extends z.ZodType>(
+  request: Request,
+  schema: T,
+  limitBytes: number = BODY_LIMIT_BYTES.form,
+): Promise<z.infer<T>> {
+  const raw = await readJsonValue(request, limitBytes);
   const parsed = schema.safeParse(raw);
   if (!parsed.success) {
     throw new ApiError(

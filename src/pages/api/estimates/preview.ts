@@ -2,6 +2,7 @@ import { EngineInputError, previewEstimate } from '../../../lib/consolidation';
 import { estimatePreviewSchema } from '../../../lib/schemas/estimate-preview';
 import { ApiError } from '../../../lib/server/http/api-error';
 import { requirePermission } from '../../../lib/server/http/guards';
+import { BODY_LIMIT_BYTES } from '../../../lib/server/http/read-body';
 import { handleApi, json, readJsonBody } from '../../../lib/server/http/respond';
 
 export const prerender = false;
@@ -13,7 +14,7 @@ export const prerender = false;
  */
 export const POST = handleApi(async (context) => {
   await requirePermission(context, 'estimate', 'create');
-  const input = await readJsonBody(context.request, estimatePreviewSchema);
+  const input = await readJsonBody(context.request, estimatePreviewSchema, BODY_LIMIT_BYTES.estimate);
   try {
     return json(previewEstimate(input));
   } catch (error) {

@@ -4,8 +4,9 @@ import { appContext } from '../../../lib/server/app-context';
 import { authenticateFirmKey } from '../../../lib/server/auth/firm-key';
 import { config } from '../../../lib/server/config';
 import { submitUpload } from '../../../lib/server/contribute/submit-upload';
-import { refuseOversizedBody, sha256Of } from '../../../lib/server/contribute/upload-request';
+import { MAX_UPLOAD_BYTES, sha256Of } from '../../../lib/server/contribute/upload-request';
 import { ApiError } from '../../../lib/server/http/api-error';
+import { BODY_LIMIT_BYTES, parseJsonBytes, readBodyBytes, requireStorableText } from '../../../lib/server/http/read-body';
 import { handleApi, issuesFromZod, json } from '../../../lib/server/http/respond';
 
 export const prerender = false;
@@ -21,9 +22,15 @@ const DELIMITER_NAMES: Record<string, (typeof DELIMITERS)[number]> = { comma: ',
 export const POST = handleApi(async (context) => {
   const { auth, database, outbox } = appContext();
   const caller = await authenticateFirmKey(auth, context.request.headers);
-  refuseOversizedBody(context.request);
   const type = (context.request.headers.get('content-type') ?? '').toLowerCase();
-  const bytes = new Uint8Array(await context.request.arrayBuffer());
+  const isJson = type.includes('application/json');
+  if (!isJson && !type.includes('text/csv')) {
+    throw new ApiError(
+      'UNSUPPORTED_MEDIA_TYPE',
+      'Send Content-Type: text/csv (a CSV file as the body) or application/json ({ "rows": [...] }).',
+    );
+  }
+  const bytes = await readBodyBytes(context.request, isJson ? BODY_LIMIT_BYTES.partnerRows : MAX_UPLOAD_BYTES);
   const contributor = {
     userId: null,
     firmId: caller.firmId,
@@ -32,24 +39,13 @@ export const POST = handleApi(async (context) => {
     apiKeyId: caller.keyId,
   };
   let rawRows: RawRow[] | undefined;
-  let fileName = context.url.searchParams.get('fileName');
-  if (type.includes('application/json')) {
-    let body: unknown;
-    try {
-      body = JSON.parse(new TextDecoder().decode(bytes));
-    } catch {
-      throw new ApiError('BAD_REQUEST', 'The body is not valid JSON.');
-    }
-    const parsed = partnerJsonUploadSchema.safeParse(body);
+  let fileName = requireStorableText(context.url.searchParams.get('fileName'), 'fileName');
+  if (isJson) {
+    const parsed = partnerJsonUploadSchema.safeParse(parseJsonBytes(bytes));
     if (!parsed.success)
       throw new ApiError('VALIDATION_FAILED', 'The JSON upload does not fit; see issues.', issuesFromZod(parsed.error));
     rawRows = parsed.data.rows.map((values, index) => ({ row: index + 1, values }));
     fileName = parsed.data.fileName ?? fileName;
-  } else if (!type.includes('text/csv')) {
-    throw new ApiError(
-      'UNSUPPORTED_MEDIA_TYPE',
-      'Send Content-Type: text/csv (a CSV file as the body) or application/json ({ "rows": [...] }).',
-    );
   }
   const delimiterName = context.url.searchParams.get('delimiter');
   const delimiter = delimiterName ? DELIMITER_NAMES[delimiterName] : undefined;
@@ -62,7 +58,11 @@ export const POST = handleApi(async (context) => {
     fileName: fileName ?? (rawRows ? 'api-upload.json' : 'api-upload.csv'),
     mediaType: rawRows ? 'application/json' : 'text/csv',
     sha256: sha256Of(bytes),
-    options: { format: 'csv' as const, delimiter, region: context.url.searchParams.get('region') ?? undefined },
+    options: {
+      format: 'csv' as const,
+      delimiter,
+      region: requireStorableText(context.url.searchParams.get('region') ?? undefined, 'region'),
+    },
   };
   const submission = await submitUpload(database.db, contributor, upload, 'api', config.appUrl, rawRows);
   outbox?.kick();

@@ -1,11 +1,13 @@
 import { appContext } from '../../../lib/server/app-context';
 import { recordAudit } from '../../../lib/server/audit/audit-log';
+import { readEmptyBody } from '../../../lib/server/http/read-body';
 import { handleApi, json } from '../../../lib/server/http/respond';
 
 export const prerender = false;
 
 /** Ends the current session. */
 export const POST = handleApi(async (context) => {
+  await readEmptyBody(context.request);
   const { auth, database } = appContext();
   const identity = context.locals.identity;
   const { headers } = await auth.api.signOut({ headers: context.request.headers, returnHeaders: true });

@@ -2,6 +2,7 @@ import { recordCorrectionSchema } from '../../../../../lib/schemas/record-correc
 import { appContext } from '../../../../../lib/server/app-context';
 import { editReturnedRecord } from '../../../../../lib/server/contribute/edit-record';
 import { activeFirmId, requirePermission } from '../../../../../lib/server/http/guards';
+import { BODY_LIMIT_BYTES } from '../../../../../lib/server/http/read-body';
 import { handleApi, json, readJsonBody } from '../../../../../lib/server/http/respond';
 
 export const prerender = false;
@@ -9,7 +10,7 @@ export const prerender = false;
 /** Corrects a record of a returned submission (values in SI units, checked like an upload row). */
 export const PATCH = handleApi(async (context) => {
   const identity = await requirePermission(context, 'submission', 'create');
-  const body = await readJsonBody(context.request, recordCorrectionSchema);
+  const body = await readJsonBody(context.request, recordCorrectionSchema, BODY_LIMIT_BYTES.recordCorrection);
   const contributor = {
     userId: identity.user.id,
     firmId: activeFirmId(identity),
