@@ -443,7 +443,7 @@ const MATRIX: Record<string, Case[]> = {
       request: () => ({
         method: 'POST',
         path: '/api/estimates',
-        body: { name: 'Matrix embankment', unitSystem: 'SI', input: { layers: [] } },
+        body: { name: 'Matrix embankment', unitSystem: 'SI', input: PREVIEW_BODY },
       }),
       expect: everyone(403, { anon: 401, aOwner: 201, aEngineer: 201, aEstimator: 201, bAdmin: 201 }),
     },
