@@ -3,6 +3,7 @@ import { rethrowAuthError } from '../auth/auth-errors';
 import { FIRM_KEY_CONFIG } from '../auth/create-auth';
 import { ApiError } from '../http/api-error';
 import type { FirmDeps } from './firm-service';
+import { discardNewApiKey, withUndo } from './undo-create';
 
 /** The firm's API keys, without their secrets (only the first characters are kept). */
 export async function listApiKeys(deps: FirmDeps, firmId: string) {
@@ -23,15 +24,19 @@ export async function createApiKey(deps: FirmDeps, firmId: string, name: string)
       headers: deps.headers,
       body: { configId: FIRM_KEY_CONFIG, name, organizationId: firmId },
     });
-    await recordAudit(deps.db, {
-      actorUserId: deps.identity.user.id,
-      firmId,
-      action: 'firm.api_key_created',
-      objectType: 'api_key',
-      objectId: created.id,
-      summary: { name, start: created.start },
-      ipAddress: deps.ipAddress,
-    });
+    await withUndo(
+      () =>
+        recordAudit(deps.db, {
+          actorUserId: deps.identity.user.id,
+          firmId,
+          action: 'firm.api_key_created',
+          objectType: 'api_key',
+          objectId: created.id,
+          summary: { name, start: created.start },
+          ipAddress: deps.ipAddress,
+        }),
+      () => discardNewApiKey(deps.db, created.id),
+    );
     return {
       key: { id: created.id, name: created.name, start: created.start, createdAt: created.createdAt },
       secret: created.key,

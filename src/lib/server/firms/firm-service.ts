@@ -6,6 +6,7 @@ import type { Auth } from '../auth/create-auth';
 import type { ResolvedIdentity } from '../auth/resolve-actor';
 import type { Database } from '../db/schema';
 import { ApiError } from '../http/api-error';
+import { discardNewFirm, withUndo } from './undo-create';
 
 export interface FirmDeps {
   auth: Auth;
@@ -55,8 +56,12 @@ export async function createFirm(deps: FirmDeps, name: string) {
     rethrowAuthError(error, { YOU_HAVE_REACHED_THE_MAXIMUM_NUMBER_OF_ORGANIZATIONS: 'You belong to as many firms as allowed.' });
   }
   if (!firm) throw new ApiError('INTERNAL', 'The firm could not be created.');
-  await audit(deps, firm.id, 'firm.created', 'firm', firm.id, { name });
-  return { id: firm.id, name: firm.name, slug: firm.slug };
+  const made = firm;
+  await withUndo(
+    () => audit(deps, made.id, 'firm.created', 'firm', made.id, { name }),
+    () => discardNewFirm(deps.db, made.id, deps.identity.actor.firmId),
+  );
+  return { id: made.id, name: made.name, slug: made.slug };
 }
 
 /** Members of the active firm; invitations only for those who manage members. */

@@ -2,6 +2,7 @@ import { recordAudit } from '../audit/audit-log';
 import { rethrowAuthError } from '../auth/auth-errors';
 import { ApiError } from '../http/api-error';
 import type { FirmDeps } from './firm-service';
+import { discardNewInvitation, withUndo } from './undo-create';
 
 const INVITE_MESSAGES = {
   USER_IS_ALREADY_A_MEMBER_OF_THIS_ORGANIZATION: 'That person is already a member of your firm.',
@@ -15,15 +16,19 @@ export async function inviteMember(deps: FirmDeps, firmId: string, email: string
       headers: deps.headers,
       body: { email, role: role as 'engineer', organizationId: firmId },
     });
-    await recordAudit(deps.db, {
-      actorUserId: deps.identity.user.id,
-      firmId,
-      action: 'firm.invitation_sent',
-      objectType: 'invitation',
-      objectId: invitation.id,
-      summary: { email, role },
-      ipAddress: deps.ipAddress,
-    });
+    await withUndo(
+      () =>
+        recordAudit(deps.db, {
+          actorUserId: deps.identity.user.id,
+          firmId,
+          action: 'firm.invitation_sent',
+          objectType: 'invitation',
+          objectId: invitation.id,
+          summary: { email, role },
+          ipAddress: deps.ipAddress,
+        }),
+      () => discardNewInvitation(deps.db, invitation.id),
+    );
     return {
       id: invitation.id,
       email: invitation.email,
