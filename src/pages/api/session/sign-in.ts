@@ -2,26 +2,28 @@ import { signInSchema } from '../../../lib/schemas/account';
 import { appContext } from '../../../lib/server/app-context';
 import { recordAudit } from '../../../lib/server/audit/audit-log';
 import { authErrorCode } from '../../../lib/server/auth/auth-errors';
+import { countSignInAttempt, forgiveSignIn } from '../../../lib/server/auth/failed-sign-ins';
 import { ApiError } from '../../../lib/server/http/api-error';
-import { enforceRateLimit } from '../../../lib/server/http/rate-limit-guard';
 import { handleApi, json, readJsonBody } from '../../../lib/server/http/respond';
 
 export const prerender = false;
 
-/** E-mail and password sign-in; the same answer whether the address is unknown or the password wrong. */
+/**
+ * E-mail and password sign-in; the same answer whether the address is unknown or the password wrong.
+ * Only failed attempts count against the account's and the address's allowance (failed-sign-ins.ts).
+ */
 export const POST = handleApi(async (context) => {
   const body = await readJsonBody(context.request, signInSchema);
-  await enforceRateLimit(context, 'sign-in');
-  const { auth, database } = appContext();
+  const { auth, database, rateLimiter } = appContext();
+  const attempt = { email: body.email, ipAddress: context.clientAddress };
+  await countSignInAttempt(rateLimiter, attempt);
+  let signedIn: { headers: Headers };
   try {
-    const { headers } = await auth.api.signInEmail({
+    signedIn = await auth.api.signInEmail({
       body: { email: body.email, password: body.password, rememberMe: true },
       headers: context.request.headers,
       returnHeaders: true,
     });
-    const response = json({ ok: true });
-    for (const cookie of headers.getSetCookie()) response.headers.append('set-cookie', cookie);
-    return response;
   } catch (error) {
     const code = authErrorCode(error);
     await recordAudit(database.db, {
@@ -39,4 +41,8 @@ export const POST = handleApi(async (context) => {
     if (code) throw new ApiError('UNAUTHENTICATED', 'The e-mail address or password is not right.');
     throw error;
   }
+  await forgiveSignIn(database.db, attempt);
+  const response = json({ ok: true });
+  for (const cookie of signedIn.headers.getSetCookie()) response.headers.append('set-cookie', cookie);
+  return response;
 });
