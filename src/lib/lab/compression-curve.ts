@@ -1,7 +1,8 @@
 import type { CurvePoint } from './geometry';
 import { cannot, type Derived, determined, shown } from './outcome';
 import { type SpecimenState, specimenState } from './specimen-state';
-import type { IncrementalTestInput } from './test-input';
+import type { IncrementalTestInput, TimeReading } from './test-input';
+import { backwardsTolerance } from './time-readings';
 
 export type Branch = 'loading' | 'unloading' | 'reloading';
 
@@ -40,7 +41,8 @@ export const BACKWARDS_STRAIN = 0.0005;
  * (ASTM D2435/D2435M), or the void ratio as given, with ε = (e0 − e)/(1 + e0). Each increment is put on a
  * branch by its stress: above every earlier stress it is first (virgin) loading, below the previous
  * stress it is unloading, otherwise reloading. A loading or reloading increment that swells, or an
- * unloading one that compresses, by more than BACKWARDS_STRAIN is listed in `problems`.
+ * unloading one that compresses, by more than BACKWARDS_STRAIN is listed in `problems`, as is an increment
+ * whose own time readings end back from an earlier reading (a slipped gauge).
  */
 export function compressionCurve(test: IncrementalTestInput): Derived<CompressionCurve> {
   const state = specimenState(test.specimen);
@@ -102,6 +104,13 @@ export function compressionCurve(test: IncrementalTestInput): Derived<Compressio
         message: `increment ${inc.incrementNo} (${shown(inc.stressKpa)} kPa) ${branch === 'unloading' ? 'compresses on unloading' : 'swells under a larger load'}: its void ratio goes from ${shown(previous.voidRatio)} to ${shown(voidRatio)}`,
       });
     }
+    const slip = readingsSlip(inc, branch === 'unloading' ? -1 : 1);
+    if (slip)
+      problems.push({
+        incrementNo: inc.incrementNo,
+        branch,
+        message: `increment ${inc.incrementNo} (${shown(inc.stressKpa)} kPa) ${slip}`,
+      });
     states.push({
       incrementNo: inc.incrementNo,
       stressKpa: inc.stressKpa,
@@ -115,6 +124,22 @@ export function compressionCurve(test: IncrementalTestInput): Derived<Compressio
     previous = { stressKpa: inc.stressKpa, voidRatio, branch };
   }
   return determined({ initial: state.value, states, problems });
+}
+
+/**
+ * When an increment's own time readings end further back than an earlier reading (against the load, by
+ * more than the tolerance of `prepareReadings`), its end value cannot be trusted: the gauge may have slipped.
+ */
+function readingsSlip(inc: IncrementalTestInput['increments'][number], sign: 1 | -1): string | null {
+  const readings = inc.readings?.filter((r) => r.elapsedMin > 0 && Number.isFinite(r.deformationMm));
+  if (!readings || readings.length < 2) return null;
+  const ordered = [...readings].sort((a, b) => a.elapsedMin - b.elapsedMin);
+  const last = ordered[ordered.length - 1] as TimeReading;
+  const peak = ordered.reduce((p, r) => (sign * (r.deformationMm - p.deformationMm) > 0 ? r : p));
+  const change = Math.abs(last.deformationMm - (ordered[0] as TimeReading).deformationMm);
+  const back = sign * (peak.deformationMm - last.deformationMm);
+  if (back <= backwardsTolerance(change)) return null;
+  return `ends ${shown(back)} mm back from its own reading at ${shown(peak.elapsedMin)} min: the gauge may have slipped`;
 }
 
 /** First-loading states with stress > 0, in order of stress (the branch Cc and σ′p are read from). */

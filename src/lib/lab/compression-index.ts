@@ -17,8 +17,8 @@ export const MAX_VIRGIN_SCATTER = 0.08;
 
 /**
  * Cc, the steepest slope of the first-loading (virgin) e–log σ′ curve: the least-squares line through
- * the three consecutive first-loading points that give the steepest slope (or through the points of a
- * range a person chose), with the range reported. Cc = −Δe/Δlog10 σ′ (Terzaghi & Peck; UFC 3-220-10
+ * the three consecutive first-loading points that give the steepest slope (the first such when several
+ * tie), or through the points of a range a person chose, with the range reported. Cc = −Δe/Δlog10 σ′ (Terzaghi & Peck; UFC 3-220-10
  * Fig. 3-12 and Eq. 5-11). Refused when the loading goes backwards, when fewer than three first-loading
  * points exist, when the steepest part is at the very start or not clearly steeper than the part before
  * it (no virgin branch), or when the points scatter about the line.
@@ -64,7 +64,7 @@ export function steepestWindow(loading: readonly CurveState[]): Derived<{ fit: S
   let best: { fit: SlopeFit; start: number } | null = null;
   for (let start = 0; start + WINDOW <= loading.length; start++) {
     const fit = fitSlope(loading.slice(start, start + WINDOW), 'auto');
-    if (!best || fit.value > best.fit.value) best = { fit, start };
+    if (!best || fit.value > best.fit.value * (1 + 1e-9)) best = { fit, start };
   }
   if (!best || !(best.fit.value > 0))
     return cannot('cc', 'no-virgin-branch', 'the void ratio does not fall with increasing load.');

@@ -40,7 +40,7 @@ export function inflectionAt(spline: NaturalSpline, timeMin: number, xs: readonl
 }
 
 /**
- * The trailing readings after the inflection that lie on one straight line: the last three (or two), then
+ * The trailing readings after the inflection that lie on one straight line: the last three, then
  * each earlier reading in turn while it lies within TAIL_STRAIGHTNESS of the change (at least TAIL_MIN_MM)
  * of the line through the later ones; the line must be at most TAIL_SLOPE_SHARE as steep as the inflection.
  */
@@ -70,8 +70,8 @@ export function autoTail(
       idx.every((i) => Math.abs((y[i] as number) - lineAt(fit, xs[i] as number)) <= tolerance)
     );
   };
-  let start = usable(n - 3) ? n - 3 : usable(n - 2) ? n - 2 : n;
-  if (start === n) return [];
+  if (!usable(n - 3)) return [];
+  let start = n - 3;
   while (start > 0 && (xs[start - 1] as number) > inflection.x) {
     const { fit } = lineFrom(start);
     if (Math.abs((y[start - 1] as number) - lineAt(fit, xs[start - 1] as number)) > tolerance) break;

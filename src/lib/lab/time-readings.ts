@@ -70,7 +70,7 @@ export function prepareReadings(
       `the readings ${sign === 1 ? 'compress' : 'swell'} although the increment ${expectedSign === 1 ? 'adds' : 'removes'} load.`,
     );
   }
-  const tolerance = Math.max(BACKWARDS_MM, BACKWARDS_SHARE * changeMm);
+  const tolerance = backwardsTolerance(changeMm);
   let peak = first;
   for (const r of used) {
     if (sign * (peak.deformationMm - r.deformationMm) > tolerance) {
@@ -89,6 +89,11 @@ export function prepareReadings(
     changeMm,
     toPoint: (timeMin, y) => ({ timeMin, deformationMm: sign * y }),
   });
+}
+
+/** How far (mm) a reading may fall back against the load before it counts as going backwards. */
+export function backwardsTolerance(changeMm: number): number {
+  return Math.max(BACKWARDS_MM, BACKWARDS_SHARE * changeMm);
 }
 
 export function timesWithin(prepared: PreparedReadings, range: TimeRange): number[] {

@@ -35,7 +35,7 @@ const softplus = (t: number) => (t > 30 ? t : Math.log1p(Math.exp(t)));
 function compression(curve: SyntheticCurve, stressKpa: number): number {
   const x = Math.log10(stressKpa / curve.sigmaPKpa);
   const w = curve.bendLogCycles;
-  const beyond = w > 0 ? w * softplus(x / w) : Math.max(0, x);
+  const beyond = w > 1e-9 ? w * softplus(x / w) : Math.max(0, x);
   return curve.cr * x + (curve.cc - curve.cr) * beyond;
 }
 
