@@ -109,7 +109,7 @@ export function reviewFlags(
           submitted: s,
           derived: [],
           tolerance,
-          message: `${label} was submitted as ${shown(s)}, but the readings do not support it: ${refused.message}.`,
+          message: `${label} was submitted as ${shown(s)}, but the readings do not support it: ${refused.message.replace(/\.$/, '')}.`,
         });
       }
       continue;

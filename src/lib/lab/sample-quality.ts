@@ -18,7 +18,8 @@ export interface SampleQuality {
  * Sample quality from the test's own curve: Δe/e0 with Δe = e0 − e at the in-situ vertical effective
  * stress, read off the first-loading curve (linear in log σ′ between points), and the class of Lunne,
  * Berre & Strandvik (1997) for the OCR band (the importer's `sampleQualityClass`). OCR = σ′p/σ′v0 from the
- * σ′p given (the interpretation passes Casagrande's, else the strain-energy value).
+ * σ′p given (the interpretation passes Casagrande's, else the strain-energy value). Refused when a first-
+ * loading increment up to the one that passes σ′v0 goes backwards (later problems do not touch the reading).
  */
 export function sampleQuality(
   curve: CompressionCurve,
@@ -28,11 +29,12 @@ export function sampleQuality(
   if (typeof inSituStressKpa !== 'number' || !(inSituStressKpa > 0)) {
     return cannot('deltaEOverE0', 'missing-input', 'the in-situ vertical effective stress σ′v0 is not given.');
   }
-  const problem = curve.problems.find((p) => p.branch === 'loading');
+  const loading = loadingStates(curve);
+  const reach = loading.find((s) => s.stressKpa >= inSituStressKpa)?.stressKpa ?? Number.POSITIVE_INFINITY;
+  const problem = curve.problems.find((p) => p.branch === 'loading' && stressOf(curve, p.incrementNo) <= reach);
   if (problem) return cannot('deltaEOverE0', 'goes-backwards', `${problem.message}.`);
   const e = voidRatioOnLoading(curve, inSituStressKpa);
   if (e === null) {
-    const loading = loadingStates(curve);
     const span =
       loading.length > 0 ? `${shown(loading[0]?.stressKpa ?? 0)}–${shown(loading.at(-1)?.stressKpa ?? 0)} kPa` : 'no stresses';
     return cannot(
@@ -52,4 +54,8 @@ export function sampleQuality(
     qualityClass,
     label: qualityClass === null ? null : SAMPLE_QUALITY_LABELS[qualityClass],
   });
+}
+
+function stressOf(curve: CompressionCurve, incrementNo: number): number {
+  return curve.states.find((s) => s.incrementNo === incrementNo)?.stressKpa ?? 0;
 }

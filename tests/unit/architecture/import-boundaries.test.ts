@@ -30,6 +30,9 @@ describe('the lint rules keep the layers apart', () => {
     ['src/lib/consolidation/probe.ts', "import { useState } from 'react';\nexport const a = useState;\n"],
     ['src/lib/consolidation/probe.ts', "import { config } from '../server/config';\nexport const a = config;\n"],
     ['src/lib/schemas/probe.ts', "import { APP_URL } from 'astro:env/server';\nexport const a = APP_URL;\n"],
+    ['src/lib/lab/probe.ts', "import { readFileSync } from 'node:fs';\nexport const a = readFileSync;\n"],
+    ['src/lib/lab/probe.ts', "import { sql } from 'kysely';\nexport const a = sql;\n"],
+    ['src/lib/lab/probe.ts', "import { db } from '../server/app-context';\nexport const a = db;\n"],
     ['src/components/dev/probe.tsx', "import { db } from '../../lib/server/app-context';\nexport const a = db;\n"],
     ['src/components/dev/probe.tsx', "import pg from 'pg';\nexport const a = pg;\n"],
     ['fakes/mail/probe.ts', "import { config } from '../../src/lib/server/config';\nexport const a = config;\n"],
@@ -40,6 +43,7 @@ describe('the lint rules keep the layers apart', () => {
 
   it.each([
     ['src/lib/consolidation/probe.ts', "import { z } from 'zod';\nexport const a = z;\n"],
+    ['src/lib/lab/probe.ts', "import Papa from 'papaparse';\nexport const a = Papa;\n"],
     ['src/components/dev/probe.tsx', "import { useState } from 'react';\nexport const a = useState;\n"],
     ['src/lib/server/probe.ts', "import pg from 'pg';\nexport const a = pg;\n"],
   ])('allows in %s: %s', (path, source) => {
