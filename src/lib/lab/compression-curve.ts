@@ -1,8 +1,8 @@
 import type { CurvePoint } from './geometry';
 import { cannot, type Derived, determined, shown } from './outcome';
 import { type SpecimenState, specimenState } from './specimen-state';
-import type { IncrementalTestInput, TimeReading } from './test-input';
-import { backwardsTolerance } from './time-readings';
+import type { IncrementalTestInput } from './test-input';
+import { readingsSlip } from './time-readings';
 
 export type Branch = 'loading' | 'unloading' | 'reloading';
 
@@ -124,22 +124,6 @@ export function compressionCurve(test: IncrementalTestInput): Derived<Compressio
     previous = { stressKpa: inc.stressKpa, voidRatio, branch };
   }
   return determined({ initial: state.value, states, problems });
-}
-
-/**
- * When an increment's own time readings end further back than an earlier reading (against the load, by
- * more than the tolerance of `prepareReadings`), its end value cannot be trusted: the gauge may have slipped.
- */
-function readingsSlip(inc: IncrementalTestInput['increments'][number], sign: 1 | -1): string | null {
-  const readings = inc.readings?.filter((r) => r.elapsedMin > 0 && Number.isFinite(r.deformationMm));
-  if (!readings || readings.length < 2) return null;
-  const ordered = [...readings].sort((a, b) => a.elapsedMin - b.elapsedMin);
-  const last = ordered[ordered.length - 1] as TimeReading;
-  const peak = ordered.reduce((p, r) => (sign * (r.deformationMm - p.deformationMm) > 0 ? r : p));
-  const change = Math.abs(last.deformationMm - (ordered[0] as TimeReading).deformationMm);
-  const back = sign * (peak.deformationMm - last.deformationMm);
-  if (back <= backwardsTolerance(change)) return null;
-  return `ends ${shown(back)} mm back from its own reading at ${shown(peak.elapsedMin)} min: the gauge may have slipped`;
 }
 
 /** First-loading states with stress > 0, in order of stress (the branch Cc and σ′p are read from). */

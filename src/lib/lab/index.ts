@@ -13,6 +13,7 @@ export {
   type CrsPoint,
   type CrsReading,
   type CrsTestInput,
+  crsPoints,
   interpretCrsTest,
   RECOMMENDED_PORE_PRESSURE_RATIO,
 } from './crs-test';

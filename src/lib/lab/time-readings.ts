@@ -106,3 +106,19 @@ export function timesWithin(prepared: PreparedReadings, range: TimeRange): numbe
 export function drainagePathMm(meanHeightMm: number, drainage: 'double' | 'single'): number {
   return drainage === 'double' ? meanHeightMm / 2 : meanHeightMm;
 }
+
+/**
+ * When an increment's own time readings end further back than an earlier reading (against the load, by
+ * more than the tolerance of `prepareReadings`), its end value cannot be trusted: the gauge may have slipped.
+ */
+export function readingsSlip(inc: { readings?: readonly TimeReading[] }, sign: 1 | -1): string | null {
+  const readings = inc.readings?.filter((r) => r.elapsedMin > 0 && Number.isFinite(r.deformationMm));
+  if (!readings || readings.length < 2) return null;
+  const ordered = [...readings].sort((a, b) => a.elapsedMin - b.elapsedMin);
+  const last = ordered[ordered.length - 1] as TimeReading;
+  const peak = ordered.reduce((p, r) => (sign * (r.deformationMm - p.deformationMm) > 0 ? r : p));
+  const change = Math.abs(last.deformationMm - (ordered[0] as TimeReading).deformationMm);
+  const back = sign * (peak.deformationMm - last.deformationMm);
+  if (back <= backwardsTolerance(change)) return null;
+  return `ends ${shown(back)} mm back from its own reading at ${shown(peak.elapsedMin)} min: the gauge may have slipped`;
+}
