@@ -34,6 +34,7 @@ const writeRoutes = routes.filter((route) => {
 
 let owner = '';
 let steward = '';
+let admin = '';
 let invitee = '';
 let keySecret = '';
 let countsBefore: Record<string, number> = {};
@@ -47,6 +48,7 @@ interface Caller {
 /** Who asks: someone allowed to use the route, so the refusal is about the input and not the caller. */
 function callerFor(pattern: string): Caller {
   if (/^\/api\/(review|vocabulary)/.test(pattern)) return { cookie: steward };
+  if (pattern.startsWith('/api/admin/')) return { cookie: admin };
   if (pattern.startsWith('/api/invitations/')) return { cookie: invitee };
   if (pattern.startsWith('/api/partner/')) return { cookie: null, headers: { 'x-api-key': keySecret } };
   if (/^\/api\/session\/(sign-in|sign-up|forgot-password|reset-password)$/.test(pattern)) return { cookie: null };
@@ -65,6 +67,8 @@ function paramValues(pattern: string): Record<string, string> {
     [/^\/api\/vocabulary\/regions\//, { id: ids.region as string }],
     [/^\/api\/vocabulary\/units\//, { id: ids.unit as string }],
     [/^\/api\/auth\/reset-password\//, { token: 'probe-token' }],
+    [/^\/api\/admin\/people\//, { id: ids.person as string }],
+    [/^\/api\/admin\/firms\//, { id: ids.firm as string }],
   ];
   const known = byPrefix.find(([prefix]) => prefix.test(pattern))?.[1] ?? {};
   return Object.fromEntries(
@@ -135,6 +139,8 @@ beforeAll(async () => {
   if (!firm) throw new Error('no firm');
   owner = await sessionCookie(person.id);
   steward = await sessionCookie(await userIdOf('steward@example.test'));
+  admin = await sessionCookie(await userIdOf('admin@example.test'));
+  ids.firm = firm.id;
 
   const colleague = await makePerson('probe-colleague', { id: firm.id, role: 'engineer' });
   ids.member = (
@@ -146,6 +152,7 @@ beforeAll(async () => {
       .executeTakeFirstOrThrow()
   ).id;
   const guest = await makePerson('probe-invitee');
+  ids.person = guest.id;
   invitee = await sessionCookie(guest.id);
   const invited = await call('POST', '/api/firm/invitations', owner, { email: guest.email, role: 'engineer' });
   ids.invitation = String((invited.body as { invitation: { id: string } }).invitation.id);

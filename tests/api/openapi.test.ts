@@ -8,7 +8,9 @@ import { call, db } from './support/world';
 /** Routes the description leaves out on purpose. */
 const UNDOCUMENTED: Record<string, string> = {
   'ALL /api/*path': 'the catch-all that answers 404 for unknown paths',
-  'ALL /api/auth/*all': "the sign-in library's own routes, used by the app's pages through /api/session/*",
+  'ALL /api/auth/*all': "the sign-in library's own routes, closed but for its two mail links",
+  'GET /api/auth/verify-email': 'a link in the confirmation mail, opened in a browser',
+  'GET /api/auth/reset-password/:token': 'a link in the password-reset mail, opened in a browser',
   'GET /api/dev/inbox': 'the development inbox, served only in development mode',
 };
 
