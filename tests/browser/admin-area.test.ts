@@ -116,7 +116,7 @@ describe('the admin area, as the people concerned see it', () => {
     await renamed.getByLabel('Name of the geological unit').fill(units.renamedTo);
     await renamed.getByTestId('entry-save').click();
     await page.getByTestId('form-success').filter({ hasText: 'Renamed' }).waitFor();
-    await expect(entry(page, units.renamedTo).getByTestId('synonyms').textContent()).resolves.toContain(units.renamed);
+    await entry(page, units.renamedTo).getByTestId('synonyms').filter({ hasText: units.renamed }).waitFor();
 
     const merged = entry(page, units.merged);
     await merged.getByTestId('merge-open').click();
@@ -125,8 +125,8 @@ describe('the admin area, as the people concerned see it', () => {
     await screenshot(page, 'admin-vocabulary-merge');
     await merged.getByTestId('merge-confirm').click();
     await page.getByTestId('form-success').filter({ hasText: 'Merged' }).waitFor();
-    await expect(entry(page, units.merged).textContent()).resolves.toContain(`merged into ${units.survivor}`);
-    await expect(entry(page, units.survivor).getByTestId('synonyms').textContent()).resolves.toContain(units.merged);
+    await entry(page, units.merged).getByText(`merged into ${units.survivor}`).waitFor();
+    await entry(page, units.survivor).getByTestId('synonyms').filter({ hasText: units.merged }).waitFor();
     await page.setViewportSize({ width: 390, height: 844 });
     await screenshot(page, 'admin-vocabulary-390');
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);

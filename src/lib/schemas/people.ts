@@ -18,21 +18,16 @@ export const directoryQuerySchema = z.strictObject({
 export type DirectoryQuery = z.infer<typeof directoryQuerySchema>;
 
 /** Suspends a person (`suspended: true`, with the reason they will be told) or lifts the suspension. */
-export const suspendPersonSchema = z.discriminatedUnion(
-  'suspended',
-  [
-    z.strictObject({
-      suspended: z.literal(true),
-      reason: z
-        .string({ error: 'Say why, in a sentence the person will read.' })
-        .trim()
-        .min(3, 'Say why, in a sentence the person will read.')
-        .max(300, 'Use at most 300 characters.'),
-    }),
-    z.strictObject({ suspended: z.literal(false) }),
-  ],
-  { error: 'Say suspended: true with a reason, or suspended: false to lift a suspension.' },
-);
+export const suspendPersonSchema = z
+  .strictObject({
+    suspended: z.boolean({ error: 'Say suspended: true with a reason, or suspended: false to lift a suspension.' }),
+    reason: z.string().trim().max(300, 'Use at most 300 characters.').optional(),
+  })
+  .superRefine((input, context) => {
+    if (input.suspended && (input.reason ?? '').length < 3) {
+      context.addIssue({ code: 'custom', path: ['reason'], message: 'Say why, in a sentence the person will read.' });
+    }
+  });
 export type SuspendPersonInput = z.infer<typeof suspendPersonSchema>;
 
 /** Passes a firm's ownership to one of its members; the owner until now becomes a firm admin. */
