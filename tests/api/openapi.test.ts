@@ -51,4 +51,18 @@ describe('GET /api/openapi.json', () => {
     expect(JSON.stringify(doc.paths['/api/estimates/preview']?.post?.requestBody)).toContain('waterTableDepth');
     expect(Object.keys(doc.components.schemas)).toEqual(expect.arrayContaining(['ErrorBody', 'UploadOptions']));
   });
+
+  it('gives every field of every request body a type (none is left as an empty schema)', async () => {
+    const doc = (await call('GET', '/api/openapi.json', null)).body as Document;
+    const empty: string[] = [];
+    const walk = (node: unknown, at: string) => {
+      if (!node || typeof node !== 'object') return;
+      if (!Array.isArray(node) && Object.keys(node).length === 0) empty.push(at);
+      for (const [key, child] of Object.entries(node)) walk(child, `${at}.${key}`);
+    };
+    for (const [path, operations] of Object.entries(doc.paths)) {
+      for (const [method, operation] of Object.entries(operations)) walk(operation.requestBody, `${method} ${path}`);
+    }
+    expect(empty).toEqual([]);
+  });
 });

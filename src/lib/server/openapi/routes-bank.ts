@@ -22,6 +22,24 @@ export const multipartUpload = z.object({
   }),
 });
 
+/**
+ * The partner JSON body as the endpoint parses it; `rows` is read as anything first (to name stray keys),
+ * then piped into the list it must be, which is the part worth describing.
+ */
+const partnerJsonBody = partnerJsonUploadSchema.extend({
+  rows: partnerJsonUploadSchema.shape.rows.out.meta({
+    description:
+      'One object per test, keyed by the template’s field keys (boreholeId, depthTop, compressionIndex …), values in SI units.',
+  }),
+});
+
+/** A correction as the endpoint parses it, its `values` described by the object they are piped into. */
+const correctionBody = recordCorrectionSchema.extend({
+  values: recordCorrectionSchema.shape.values.out.meta({
+    description: 'The fields to change, keyed by the template’s field keys, values in SI units (null clears one).',
+  }),
+});
+
 /** A partner script's CSV body: the template's columns, one test per row. */
 export const csvBody = z
   .string()
@@ -57,7 +75,7 @@ export const BANK_ROUTES: DocumentedRoute[] = [
       'Upload test records from a script: a CSV body (Content-Type: text/csv) or JSON rows keyed by field, in SI units. Stored whole or not at all.',
     query: partnerQuery,
     body: [
-      { schema: partnerJsonUploadSchema, mediaType: 'application/json' },
+      { schema: partnerJsonBody, mediaType: 'application/json' },
       { schema: csvBody, mediaType: 'text/csv' },
     ],
     success: { status: 201, description: '{ submission }; 422 with one issue per row and field when any row is wrong.' },
@@ -127,7 +145,7 @@ export const BANK_ROUTES: DocumentedRoute[] = [
     who: uploadRoles,
     summary: 'Correct a record of a returned submission (SI units, checked like an upload row).',
     params: { id: uuidParam, recordId: uuidParam },
-    body: json(recordCorrectionSchema),
+    body: json(correctionBody),
     success: { status: 200, description: 'The corrected record.' },
   },
   {
