@@ -43,7 +43,10 @@ interface Explained {
   cautions: readonly string[];
 }
 
-/** `GET /api/statistics`: every parameter's figures, the six usual correlations (no points), the published correlations' bias. */
+/**
+ * `GET /api/statistics`: every parameter's figures, the six usual correlations (no points), and the bias
+ * against the published correlations that no chart draws (those on a chart come with its answer).
+ */
 export interface StatisticsOverview extends Explained {
   summaries: ParameterSummary[];
   /** P10/P50/P90 per parameter for an estimate, from pooled figures or else the viewer's own. */

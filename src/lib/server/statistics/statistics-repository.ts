@@ -47,7 +47,7 @@ function matchesSelection(eb: Where, selection: BankSelection, viewerFirmId: str
  * A stress level counts as normally consolidated when it ends at or above the test's σ'p, else as
  * overconsolidated; without σ'p the range the laboratory declared (the core's stressLevelRange).
  */
-const NC_LEVEL = sql<SqlBool>`case when r.preconsolidation_stress_kpa > 0 then s.stress_to_kpa >= r.preconsolidation_stress_kpa else s.stress_range = 'NC' end`;
+const NC_LEVEL = sql<SqlBool>`case when rs.preconsolidation_stress_kpa > 0 then s.stress_to_kpa >= rs.preconsolidation_stress_kpa else s.stress_range = 'NC' end`;
 const OC_LEVEL = sql<SqlBool>`not (${NC_LEVEL})`;
 
 /**
@@ -55,7 +55,8 @@ const OC_LEVEL = sql<SqlBool>`not (${NC_LEVEL})`;
  * its secret masking key, computed by PostgreSQL (pgcrypto) as the first 4 bytes of
  * HMAC-SHA-256(secret, id) — the same as recordKeyOf() — so that the app never hashes 100,000 ids.
  * cv and Cα per range come from the test's stress levels where it has them (geometric mean of cv,
- * mean of Cα per range, as splitByStressRange), else from the summary columns.
+ * mean of Cα per range, as splitByStressRange), else from the summary columns. The levels are
+ * grouped per test once and joined by hash (a lateral subquery per row costs a second per 100,000).
  */
 export function streamSelectionRows(
   trx: Transaction<Database>,
@@ -68,19 +69,21 @@ export function streamSelectionRows(
     .selectFrom('test_record as r')
     .innerJoin('geological_unit as u', 'u.id', 'r.geological_unit_id')
     .innerJoin('region as g', 'g.id', 'r.region_id')
-    .leftJoinLateral(
+    .leftJoin(
       (eb) =>
         eb
           .selectFrom('test_record_stress_level as s')
+          .innerJoin('test_record as rs', 'rs.id', 's.test_record_id')
           .select([
+            's.test_record_id as recordId',
             sql<number | null>`exp(avg(ln(s.cv_m2_per_year)) filter (where ${NC_LEVEL}))`.as('cvNc'),
             sql<number | null>`exp(avg(ln(s.cv_m2_per_year)) filter (where ${OC_LEVEL}))`.as('cvOc'),
             sql<number | null>`avg(s.secondary_compression_index) filter (where ${NC_LEVEL})`.as('caNc'),
             sql<number | null>`avg(s.secondary_compression_index) filter (where ${OC_LEVEL})`.as('caOc'),
           ])
-          .whereRef('s.test_record_id', '=', 'r.id')
+          .groupBy('s.test_record_id')
           .as('lv'),
-      (join) => join.onTrue(),
+      (join) => join.on(sql<SqlBool>`lv."recordId" = r.id`),
     )
     .where((eb) => matchesSelection(eb as Where, selection, viewerFirmId))
     .select([
@@ -126,12 +129,16 @@ export async function findLatestBankVersion(trx: Transaction<Database>): Promise
   return row?.bankVersion ?? null;
 }
 
-/** The number of a firm's records and their latest change: its own figures enter before publication. */
+/**
+ * The number of a firm's records waiting for review or returned, and their latest change: they enter
+ * its own figures before publication (published records change only with a new bank version).
+ */
 export async function findOwnRecordsState(trx: Transaction<Database>, firmId: string) {
   const row = await trx
     .selectFrom('test_record')
     .select((eb) => [eb.fn.countAll<number>().as('records'), eb.fn.max('updated_at').as('changedAt')])
     .where('firm_id', '=', firmId)
+    .where('status', 'in', ['pending', 'returned'])
     .executeTakeFirstOrThrow();
   return { records: row.records, changedAt: row.changedAt ? new Date(row.changedAt).toISOString() : null };
 }
