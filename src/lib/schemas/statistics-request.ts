@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { CORRELATION_PAIR_IDS, PARAMETER_KEYS, type ParameterKey } from '../statistics';
+import { CORRELATION_PAIR_IDS } from '../statistics/correlation-pairs';
+import { PARAMETER_KEYS, type ParameterKey } from '../statistics/parameters';
 import { type BankSelection, bankSelectionSchema, splitSelectionParams } from './bank-selection';
 
 /**
