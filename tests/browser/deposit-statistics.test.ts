@@ -43,7 +43,8 @@ describe('a deposit page', () => {
     await cvCard.getByTestId('value-p50').waitFor();
     expect(await cvCard.getByRole('heading').textContent()).toBe('cv NC (m²/yr)');
     const allCounts = (await cvCard.getByTestId('card-counts').textContent()) ?? '';
-    expect(allCounts).toMatch(/n = \d+ tests · [23] firms/);
+    expect(allCounts).toMatch(/n = \d+ tests · \d+ firms/);
+    expect(Number(/(\d+) firms/.exec(allCounts)?.[1])).toBeGreaterThanOrEqual(2);
     const allN = Number(/n = (\d+)/.exec(allCounts)?.[1]);
     await screenshot(page, 'deposit-typical-values');
 

@@ -34,7 +34,7 @@ export const profileOptionsSchema = z.strictObject({
 export const compareOptionsSchema = overviewOptionsSchema;
 
 const MAX_SITE_VALUES = 20;
-const siteValue = z.number({ error: 'Each site value is a number in the bank’s SI unit.' }).finite();
+const siteValue = z.number({ error: 'Each site value is a number in the bank’s SI unit.' });
 const valuesShape = Object.fromEntries(
   PARAMETER_KEYS.map((key) => [
     key,
