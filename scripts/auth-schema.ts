@@ -17,7 +17,7 @@ const auth = createAuth({
   appUrl: 'http://127.0.0.1:4321',
   secret: 'schema-generation-only-secret-000000000',
   sendMail: async () => {},
-  rateLimitStorage: { consume: async () => ({ allowed: true, retryAfter: null }) },
+  rateLimitStorage: { consume: async () => ({ allowed: true, retryAfter: null }), giveBack: async () => {} },
   events: { signedIn: async () => {}, firstFirmOf: async () => null },
 });
 const migrations = await getMigrations(auth.options);

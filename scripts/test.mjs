@@ -161,6 +161,7 @@ async function main() {
       CLAYBANK_TEST_SEARCH_KEY: search.key,
       CLAYBANK_TEST_DATABASE_URL: urls.appUrl,
       CLAYBANK_TEST_OWNER_URL: urls.ownerUrl,
+      CLAYBANK_TEST_SUPER_URL: urls.superUrl.replace(/\/postgres$/, `/${database}`),
       CLAYBANK_TEST_SMTP_URL: mail.smtpUrl,
       CLAYBANK_TEST_INBOX_URL: mail.inboxUrl,
       CLAYBANK_TEST_DEMO_SIGN_INS: join(runDir, 'demo-sign-ins.json'),

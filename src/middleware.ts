@@ -4,6 +4,7 @@ import { appServices } from './lib/server/app-context';
 import { CLIENT_IP_HEADER } from './lib/server/auth/create-auth';
 import { resolveIdentity } from './lib/server/auth/resolve-actor';
 import { config } from './lib/server/config';
+import { methodGuard } from './lib/server/http/method-guard';
 import { errorResponse } from './lib/server/http/respond';
 import { isCrossSiteWrite } from './lib/server/http/same-origin';
 import { hasSessionCookie } from './lib/server/http/session-cookie';
@@ -84,4 +85,7 @@ const resolveLocals = defineMiddleware(async (context, next) => {
   return response;
 });
 
-export const onRequest = sequence(securityHeaders, sameOriginWrites, resolveLocals);
+/** 405 (with Allow) for a method an API endpoint does not export; 204 with Allow for OPTIONS. */
+const apiMethods = methodGuard(import.meta.glob('./pages/api/**/*.ts'));
+
+export const onRequest = sequence(securityHeaders, apiMethods, sameOriginWrites, resolveLocals);

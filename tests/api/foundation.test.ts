@@ -150,6 +150,35 @@ describe('POST /api/preferences/unit-system', () => {
     }
   });
 
+  // The form post is read like a JSON body: within the small-body limit, strict, and refusing text that
+  // cannot be stored. source: OWASP ASVS 5.0 §4.1 / §15.3.3 (strict bodies), §5.2.1 (sizes the app can
+  // process); PostgreSQL 15 docs §8.3 (text cannot hold NUL).
+  const form = 'application/x-www-form-urlencoded';
+  const refusal = async (response: Response, status: number) => {
+    expect(response.status).toBe(status);
+    expect(response.headers.get('set-cookie')).toBeNull();
+    return (await response.json()).error as { code: string; issues?: { path: string }[] };
+  };
+
+  it('refuses a form field it does not take, naming it', async () => {
+    const error = await refusal(await post(new URLSearchParams({ unitSystem: 'SI', ownerId: 'x' }), form), 400);
+    expect(error.code).toBe('VALIDATION_FAILED');
+    expect(JSON.stringify(error.issues)).toContain('ownerId');
+  });
+
+  it('refuses a NUL in a form field, naming the field (a form cannot carry an unpaired surrogate: UTF-8 has none)', async () => {
+    const error = await refusal(await post('unitSystem=SI&returnTo=%2Fbank%00', form), 400);
+    expect(error.code).toBe('VALIDATION_FAILED');
+    expect(error.issues?.map((issue) => issue.path)).toContain('returnTo');
+  });
+
+  it('refuses a field sent twice, and a form over 32 kB with 413', async () => {
+    const twice = await refusal(await post('unitSystem=SI&unitSystem=US', form), 400);
+    expect(twice.issues?.map((issue) => issue.path)).toContain('unitSystem');
+    const big = await refusal(await post(`unitSystem=SI&returnTo=/${'a'.repeat(40 * 1024)}`, form), 413);
+    expect(big.code).toBe('PAYLOAD_TOO_LARGE');
+  });
+
   it('is read on the server: the home page says which units are in use', async () => {
     const html = await (await fetch(`${base}/`, { headers: { cookie: 'claybank_units=US' } })).text();
     expect(html).toContain('US customary');

@@ -17,6 +17,17 @@ beforeAll(async () => {
 });
 afterAll(() => db.destroy());
 
+/** A profile the estimate schema accepts (one clay layer under a wide fill). */
+const PROFILE = {
+  unitSystem: 'SI',
+  waterTableDepth: 1,
+  layers: [
+    { name: 'Clay', thickness: 6, unitWeightAboveWater: 17, unitWeightBelowWater: 16, cc: 0.6, cr: 0.06, e0: 1.8, ocr: 1, cv: 2 },
+  ],
+  load: { type: 'wideFill', pressure: 40 },
+  drainage: { top: 'pervious', bottom: 'pervious' },
+};
+
 const EXTRA_FIELDS = () => [
   { firmId: firmB },
   { firm_id: firmB },
@@ -35,7 +46,7 @@ describe.each([
   ['POST', '/api/firm/invitations', () => owner, { email: 'extra-fields@example.test', role: 'engineer' }],
   ['PATCH', '/api/firm/members/:member', () => owner, { role: 'contributor' }],
   ['POST', '/api/firm/api-keys', () => owner, { name: 'extra fields key' }],
-  ['POST', '/api/estimates', () => owner, { name: 'Extra fields estimate', unitSystem: 'SI', input: {} }],
+  ['POST', '/api/estimates', () => owner, { name: 'Extra fields estimate', unitSystem: 'SI', input: PROFILE }],
   ['POST', '/api/vocabulary/regions', () => steward, { name: 'Extra fields region' }],
   ['POST', '/api/session/active-firm', () => owner, { firmId: 'x' }],
   [
@@ -73,21 +84,18 @@ describe.each([
   });
 });
 
-describe('better-auth sign-up route', () => {
-  it('does not let a new account choose its platform role or mark itself verified', async () => {
+describe("the sign-in library's own sign-up route", () => {
+  it('is not exposed, so a new account cannot choose its platform role or mark itself verified there', async () => {
     const email = `role-grab.${Date.now()}@example.test`;
-    await call('POST', '/api/auth/sign-up/email', null, {
+    const result = await call('POST', '/api/auth/sign-up/email', null, {
       name: 'Grabber',
       email,
       password: 'a-long-password-1',
       role: 'admin',
       emailVerified: true,
     });
-    const user = await db.selectFrom('user').select(['role', 'emailVerified']).where('email', '=', email).executeTakeFirst();
-    if (user) {
-      expect(user.role).not.toBe('admin');
-      expect(user.emailVerified).toBe(false);
-    }
+    expect(result.status).toBe(404);
+    expect(await db.selectFrom('user').select('id').where('email', '=', email).execute()).toEqual([]);
   });
 });
 

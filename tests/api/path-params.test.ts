@@ -4,7 +4,7 @@
 // RFC 9562 §4 (uuid text form); RFC 9110 §15.5.5 (404 Not Found).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { routeInventory } from './support/route-inventory';
-import { call, db, sessionCookie, userIdOf } from './support/world';
+import { base, call, db, sessionCookie, userIdOf } from './support/world';
 
 /** Who may reach each route's id check (the permission check comes first). */
 const ACTOR: Record<string, 'owner' | 'steward'> = {
@@ -41,7 +41,14 @@ const AUTH_ID_ROUTES = new Set([
   '/api/invitations/:id',
   '/api/invitations/:id/accept',
   '/api/invitations/:id/reject',
+  '/api/auth/reset-password/:token',
 ]);
+
+/**
+ * The sign-in library's mail links: a well-formed token that names nothing (expired, used) forwards to
+ * the page the mail link names, with the reason, as the library's link must; malformed ones are 404.
+ */
+const MAIL_LINK_PAGE: Record<string, string> = { '/api/auth/reset-password/:token': '/reset-password' };
 
 const routes = routeInventory()
   .filter((route) => !route.startsWith('PAGE ') && !route.startsWith('ALL '))
@@ -105,6 +112,19 @@ describe.each(routes.map((route) => [route]))('%s', (route) => {
       expect(result.text.length).toBeLessThan(1000);
     });
   });
+
+  const mailLinkPage = MAIL_LINK_PAGE[pattern];
+  if (mailLinkPage) {
+    it('a well-formed token that names nothing forwards to its page on this site, with the reason', async () => {
+      const path = `${pattern.replace(/:\w+/g, valid)}?callbackURL=${mailLinkPage}`;
+      const result = await call(method, path, null);
+      expect(result.status, result.text.slice(0, 300)).toBe(302);
+      const to = new URL(result.location ?? '', base);
+      expect(to.origin).toBe(new URL(base).origin);
+      expect(`${to.pathname}${to.search}`).toBe(`${mailLinkPage}?error=INVALID_TOKEN`);
+    });
+    return;
+  }
 
   it('answers 404 for a well-formed id that names nothing', async () => {
     const path = pattern.replace(/:\w+/g, valid);

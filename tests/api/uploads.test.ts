@@ -277,6 +277,56 @@ describe('partner uploads by API key', () => {
   });
 });
 
+describe('partner rows carrying what the bank sets', () => {
+  it('refuses each such key with 400 naming the key and the row, and stores nothing', async () => {
+    const firm = await newFirm('partner-keys');
+    const key = (await call('POST', '/api/firm/api-keys', firm.cookie, { name: 'lab export' })).body as { secret: string };
+    const row = {
+      boreholeId: 'PK-1',
+      region: 'Saltreach Estuary',
+      geologicalUnit: 'Saltreach Estuarine Clay',
+      depthTop: 4,
+      depthBottom: 4.4,
+      compressionIndex: 0.7,
+    };
+    for (const bankKey of ['firmId', 'status', 'id', 'publishedAt', 'bankVersion', 'submissionId', 'ownerId']) {
+      const rows = [row, { ...row, depthTop: 5, depthBottom: 5.4, [bankKey]: 'set-by-me' }];
+      const refused = await call('POST', '/api/partner/submissions', null, { rows }, { 'x-api-key': key.secret });
+      expect(refused.status, bankKey).toBe(400);
+      const issue = (errorOf(refused.body).issues ?? []).find((i) => i.path === `rows.2.${bankKey}`);
+      expect(issue?.message, bankKey).toContain(`"${bankKey}" is set by the bank`);
+    }
+    expect(await recordCount(firm.id)).toBe(0);
+  });
+});
+
+describe('text a spreadsheet may run as a formula', () => {
+  it('is stored as typed and flagged for the steward on the review page', async () => {
+    const firm = await newFirm('formula');
+    const key = (await call('POST', '/api/firm/api-keys', firm.cookie, { name: 'lab export' })).body as { secret: string };
+    const row = {
+      boreholeId: 'FX-1',
+      region: 'Saltreach Estuary',
+      geologicalUnit: 'Saltreach Estuarine Clay',
+      depthTop: 4,
+      depthBottom: 4.4,
+      compressionIndex: 0.7,
+      samplingMethod: "=cmd|' /C calc'!A0",
+    };
+    const stored = await call('POST', '/api/partner/submissions', null, { rows: [row] }, { 'x-api-key': key.secret });
+    expect(stored.status, stored.text).toBe(201);
+    const submissionId = (stored.body as { submission: { id: string } }).submission.id;
+    const review = (await call('GET', `/api/review/${submissionId}`, stewardCookie)).body as {
+      records: { samplingMethod: string; importFlags: { field: string; reason: string }[] }[];
+    };
+    const [record] = review.records;
+    expect(record?.samplingMethod).toBe(row.samplingMethod);
+    expect(record?.importFlags).toEqual([
+      expect.objectContaining({ field: 'samplingMethod', reason: expect.stringContaining('may run as a formula') }),
+    ]);
+  });
+});
+
 describe('review round trip', () => {
   it('returns a record with a comment, takes the correction, and publishes on acceptance', async () => {
     const firm = await newFirm('roundtrip');

@@ -53,9 +53,10 @@ export default function SharedPreview({ check }: SharedPreviewProps) {
         </div>
         {check && check.flags.length > 0 && (
           <div data-testid="anonymity-flags">
-            <h3 className="text-sm text-caution-700">Shared text that may identify a site</h3>
+            <h3 className="text-sm text-caution-700">Shared text the stewards will look at</h3>
             <p className="text-xs text-ink-500">
-              The stewards will look at these; change the text if it names a project or client.
+              Text that may identify a site, or that a spreadsheet may run as a formula. Change the text if it names a project or
+              client.
             </p>
             <ul className="mt-1 list-disc pl-5 text-xs">
               {check.flags.map((flag) => (

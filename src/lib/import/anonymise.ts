@@ -7,6 +7,7 @@ import {
   type SharedFieldKey,
   type TextFieldKey,
 } from './fields';
+import { formulaFlagReason } from './formula-text';
 import { identifyingReasons, type PrivateValue } from './identifying-text';
 import { formatValue } from './row-ranges';
 import { SAMPLE_QUALITY_LABELS } from './sample-quality';
@@ -24,7 +25,10 @@ export type SharedPart = Pick<TestRecordRow, SharedFieldKey | (typeof SHARED_RES
   increments: TestRecordIncrement[];
 };
 
-/** Shared free text that may identify the firm's project or site, for the data steward to look at. */
+/**
+ * Shared free text for the data steward to look at: text that may identify the firm's project or site,
+ * and text a spreadsheet may run as a formula.
+ */
 export interface AnonymityFlag {
   field: string;
   reason: string;
@@ -94,6 +98,8 @@ function identifyingFlags(record: TestRecordRow, privatePart: PrivatePart): Anon
     if (typeof text !== 'string') continue;
     for (const reason of identifyingReasons(text, privateValues))
       flags.push({ field: key, reason: `${FIELD_BY_KEY.get(key)?.label} ${reason}.` });
+    const formula = formulaFlagReason(FIELD_BY_KEY.get(key)?.label ?? key, text);
+    if (formula) flags.push({ field: key, reason: formula });
   }
   return flags;
 }

@@ -28,6 +28,7 @@ export {
   type PrivateFieldKey,
   type SharedFieldKey,
 } from './fields';
+export { formulaFlagReason, looksLikeFormula, neutraliseCell } from './formula-text';
 export { rememberKey } from './header-text';
 export { MAX_FILE_BYTES, MAX_ROWS } from './limits';
 export { LOCATION_CELL_PATTERN, locationCellFromCoordinates } from './location-cell';

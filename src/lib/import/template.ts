@@ -1,5 +1,6 @@
 import Papa from 'papaparse';
 import { IMPORT_FIELDS, type ImportFieldKey } from './fields';
+import { neutraliseCell } from './formula-text';
 import { isMeasuredKind, UNIT_CHOICES } from './units';
 
 /**
@@ -55,10 +56,15 @@ export function templateHeader(field: (typeof IMPORT_FIELDS)[number]): string {
 /**
  * The CSV template: a header of every import field with its SI unit, and one invented example row.
  * Starts with a UTF-8 byte-order mark so spreadsheets show σ', Δ and ² correctly; lines end in CRLF.
+ * Every text cell goes through neutraliseCell, as in every download (numbers stay numbers, so a
+ * negative value is never turned into text).
  */
 export function templateCsv(): string {
-  const header = IMPORT_FIELDS.map(templateHeader);
-  const example = IMPORT_FIELDS.map((f) => EXAMPLE[f.key]);
+  const header = IMPORT_FIELDS.map((f) => neutraliseCell(templateHeader(f)));
+  const example = IMPORT_FIELDS.map((f) => {
+    const value = EXAMPLE[f.key] ?? '';
+    return f.type === 'text' ? neutraliseCell(value) : value;
+  });
   return `\uFEFF${Papa.unparse([header, example], { newline: '\r\n' })}\r\n`;
 }
 

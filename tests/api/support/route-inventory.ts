@@ -1,5 +1,6 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import { join, relative } from 'node:path';
+import { LIBRARY_ROUTES } from '../../../src/lib/server/auth/library-routes';
 
 const pagesDir = join(import.meta.dirname, '../../../src/pages');
 
@@ -22,7 +23,8 @@ function routePattern(file: string): string {
 
 /**
  * Every route the app serves, as `METHOD /pattern` for endpoints and `PAGE /pattern` for pages,
- * read from the files under src/pages (so a new file shows up here by itself).
+ * read from the files under src/pages (so a new file shows up here by itself), and the sign-in
+ * library's routes that its catch-all lets through (from the allow-list in library-routes.ts).
  */
 export function routeInventory(): string[] {
   const routes: string[] = [];
@@ -35,5 +37,6 @@ export function routeInventory(): string[] {
       for (const method of methods) routes.push(`${method} ${routePattern(file)}`);
     }
   }
+  for (const route of LIBRARY_ROUTES) routes.push(`${route.method} ${route.path}`);
   return routes.sort();
 }

@@ -16,6 +16,8 @@ export interface RateLimitDecision {
 
 export interface RateLimitStorage {
   consume(key: string, rule: RateLimitRule): Promise<RateLimitDecision>;
+  /** Takes one use back out of each counter (never below zero), e.g. for an attempt that turned out fine. */
+  giveBack(keys: readonly string[]): Promise<void>;
 }
 
 /**
@@ -38,6 +40,14 @@ export function databaseRateLimiter(db: Kysely<Database>): RateLimitStorage {
       const row = rows[0];
       if (!row || row.count <= rule.max) return { allowed: true, retryAfter: null };
       return { allowed: false, retryAfter: Math.max(1, Math.ceil((row.window_started_ms + windowMs - nowMs) / 1000)) };
+    },
+    async giveBack(keys) {
+      if (keys.length === 0) return;
+      await db
+        .updateTable('rate_limit_bucket')
+        .set({ count: sql<number>`greatest(count - 1, 0)` })
+        .where('key', 'in', [...keys])
+        .execute();
     },
   };
 }

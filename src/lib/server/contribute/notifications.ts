@@ -15,7 +15,7 @@ export async function stewardsNewSubmissionMails(
   const firm = await findFirm(trx, facts.firmId);
   const what = facts.resubmitted ? 'corrected and sent back' : 'submitted';
   const flagged = facts.flaggedRows
-    ? `\n${facts.flaggedRows} of them carry import flags (free text that may identify a site).`
+    ? `\n${facts.flaggedRows} of them carry import flags (shared text that may identify a site, or that a spreadsheet may run as a formula).`
     : '';
   return stewards.map((steward) => ({
     to: steward.email,

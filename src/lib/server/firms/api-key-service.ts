@@ -6,6 +6,7 @@ import { NotFoundError } from '../errors';
 import { auditFirmAction, readAsCaller } from './firm-audit';
 import type { FirmCaller } from './firm-caller';
 import { findFirmApiKey, listFirmApiKeys } from './firm-repository';
+import { discardNewApiKey, withUndo } from './undo-create';
 
 type FirmApp = Pick<AppServices, 'db' | 'auth'>;
 
@@ -25,13 +26,18 @@ export async function createApiKey(app: FirmApp, caller: FirmCaller, firmId: str
   } catch (error) {
     rethrowAuthError(error);
   }
-  await auditFirmAction(app, caller, {
-    firmId,
-    action: 'firm.api_key_created',
-    objectType: 'api_key',
-    objectId: created.id,
-    summary: { name, start: created.start },
-  });
+  const made = created;
+  await withUndo(
+    () =>
+      auditFirmAction(app, caller, {
+        firmId,
+        action: 'firm.api_key_created',
+        objectType: 'api_key',
+        objectId: made.id,
+        summary: { name, start: made.start },
+      }),
+    () => discardNewApiKey(app, caller, made.id),
+  );
   return {
     key: { id: created.id, name: created.name, start: created.start, createdAt: created.createdAt },
     secret: created.key,

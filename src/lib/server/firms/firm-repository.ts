@@ -93,3 +93,25 @@ export async function findFirmApiKey(trx: Transaction<Database>, firmId: string,
     .where('referenceId', '=', firmId)
     .executeTakeFirst();
 }
+
+/** Points every session whose active firm is `firmId` back at `previousFirmId` (null: no active firm). */
+export async function restoreActiveFirm(trx: Transaction<Database>, firmId: string, previousFirmId: string | null) {
+  await trx
+    .updateTable('session')
+    .set({ activeOrganizationId: previousFirmId })
+    .where('activeOrganizationId', '=', firmId)
+    .execute();
+}
+
+/** Deletes a firm; its memberships go with it. Only for taking back a firm made moments ago. */
+export async function deleteFirm(trx: Transaction<Database>, firmId: string) {
+  await trx.deleteFrom('organization').where('id', '=', firmId).execute();
+}
+
+export async function deleteApiKey(trx: Transaction<Database>, keyId: string) {
+  await trx.deleteFrom('apikey').where('id', '=', keyId).execute();
+}
+
+export async function deleteInvitation(trx: Transaction<Database>, invitationId: string) {
+  await trx.deleteFrom('invitation').where('id', '=', invitationId).execute();
+}

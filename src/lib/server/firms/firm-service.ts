@@ -7,6 +7,7 @@ import { InvalidStateError, NotFoundError, RefusedError } from '../errors';
 import { auditFirmAction, readAsCaller } from './firm-audit';
 import type { FirmCaller } from './firm-caller';
 import { findFirm, findMemberOfFirm, membersOfFirm, pendingInvitationsOfFirm } from './firm-repository';
+import { discardNewFirm, withUndo } from './undo-create';
 
 type FirmApp = Pick<AppServices, 'db' | 'auth'>;
 
@@ -25,14 +26,19 @@ export async function createFirm(app: FirmApp, caller: FirmCaller, name: string)
     rethrowAuthError(error, { YOU_HAVE_REACHED_THE_MAXIMUM_NUMBER_OF_ORGANIZATIONS: 'You belong to as many firms as allowed.' });
   }
   if (!firm) throw new Error('better-auth created no firm and raised no error');
-  await auditFirmAction(app, caller, {
-    firmId: firm.id,
-    action: 'firm.created',
-    objectType: 'firm',
-    objectId: firm.id,
-    summary: { name },
-  });
-  return { firm: { id: firm.id, name: firm.name, slug: firm.slug } };
+  const made = firm;
+  await withUndo(
+    () =>
+      auditFirmAction(app, caller, {
+        firmId: made.id,
+        action: 'firm.created',
+        objectType: 'firm',
+        objectId: made.id,
+        summary: { name },
+      }),
+    () => discardNewFirm(app, caller, made.id),
+  );
+  return { firm: { id: made.id, name: made.name, slug: made.slug } };
 }
 
 /** Members of the active firm; invitations only for those who manage members. */

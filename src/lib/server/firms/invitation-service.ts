@@ -6,6 +6,7 @@ import { InvalidStateError, NotFoundError } from '../errors';
 import { auditFirmAction, readAsCaller } from './firm-audit';
 import type { FirmCaller } from './firm-caller';
 import { findInvitationOfFirm, findInvitationWithFirm } from './firm-repository';
+import { discardNewInvitation, withUndo } from './undo-create';
 
 type FirmApp = Pick<AppServices, 'db' | 'auth'>;
 
@@ -28,13 +29,18 @@ export async function inviteMember(
   } catch (error) {
     rethrowAuthError(error, INVITE_MESSAGES);
   }
-  await auditFirmAction(app, caller, {
-    firmId,
-    action: 'firm.invitation_sent',
-    objectType: 'invitation',
-    objectId: invitation.id,
-    summary: { email, role },
-  });
+  const made = invitation;
+  await withUndo(
+    () =>
+      auditFirmAction(app, caller, {
+        firmId,
+        action: 'firm.invitation_sent',
+        objectType: 'invitation',
+        objectId: made.id,
+        summary: { email, role },
+      }),
+    () => discardNewInvitation(app, caller, made.id),
+  );
   const { id, status, expiresAt } = invitation;
   return { invitation: { id, email: invitation.email, role, status, expiresAt } };
 }

@@ -4,7 +4,6 @@ import { ApiError } from './api-error';
 
 /** Limits on our own server-side auth calls (better-auth does not limit calls made through auth.api). */
 export const AUTH_LIMITS = {
-  'sign-in': { window: 10, max: 3 },
   'sign-up': { window: 10, max: 3 },
   /** per client address: a shared office network should not lock its people out of resets */
   'password-reset': { window: 60, max: 10 },

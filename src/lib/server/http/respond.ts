@@ -3,6 +3,8 @@ import type { z } from 'zod';
 import type { AppServices } from '../app-services';
 import { ApiError, ERROR_STATUS, type ErrorBody, type ErrorCode, type FieldIssue } from './api-error';
 import { toHttpError } from './error-mapper';
+import { unstorableTextIssues } from './json-safety';
+import { BODY_LIMIT_BYTES, parseJsonBytes, readBodyBytes, readJsonValue } from './read-body';
 
 const NO_STORE = { 'cache-control': 'no-store' };
 
@@ -70,36 +72,58 @@ function validBody<T extends z.ZodType>(schema: T, raw: unknown): z.infer<T> {
   return parsed.data;
 }
 
-/** Reads a JSON body and validates it; throws ApiError (400) with per-field issues when it does not fit. */
-export async function readJsonBody<T extends z.ZodType>(request: Request, schema: T): Promise<z.infer<T>> {
-  const type = request.headers.get('content-type') ?? '';
-  if (!type.toLowerCase().includes('application/json')) {
-    throw new ApiError('UNSUPPORTED_MEDIA_TYPE', 'Send the body as JSON with the header Content-Type: application/json.');
-  }
-  let raw: unknown;
-  try {
-    raw = await request.json();
-  } catch {
-    throw new ApiError('BAD_REQUEST', 'The request body is not valid JSON. Check for a missing comma, quote or bracket.');
-  }
-  return validBody(schema, raw);
+/**
+ * Reads a JSON body within `limitBytes` (413 above it; see read-body.ts for the other refusals) and
+ * validates it; throws ApiError (400) with per-field issues when it does not fit.
+ */
+export async function readJsonBody<T extends z.ZodType>(
+  request: Request,
+  schema: T,
+  limitBytes: number = BODY_LIMIT_BYTES.form,
+): Promise<z.infer<T>> {
+  return validBody(schema, await readJsonValue(request, limitBytes));
 }
 
 /**
- * Reads a form post (urlencoded or multipart, text fields only) and validates it like a JSON body;
- * throws ApiError (400) with per-field issues when it does not fit.
+ * A JSON body already read with `readBodyBytes` (for a route that also keeps the bytes, e.g. to hash
+ * them), checked and validated exactly as readJsonBody does.
  */
-export async function readFormBody<T extends z.ZodType>(request: Request, schema: T): Promise<z.infer<T>> {
+export function parseJsonBody<T extends z.ZodType>(bytes: Uint8Array, schema: T): z.infer<T> {
+  return validBody(schema, parseJsonBytes(bytes));
+}
+
+/**
+ * Reads a urlencoded form post (text fields only) within `limitBytes` and validates it like a JSON
+ * body: 413 above the limit, 400 naming the field for a repeated field, a file, or text that cannot
+ * be stored (NUL, unpaired surrogates), and per-field issues when it does not fit the schema.
+ */
+export async function readFormBody<T extends z.ZodType>(
+  request: Request,
+  schema: T,
+  limitBytes: number = BODY_LIMIT_BYTES.form,
+): Promise<z.infer<T>> {
+  const contentType = request.headers.get('content-type') ?? '';
+  const bytes = await readBodyBytes(request, limitBytes);
   let form: FormData;
   try {
-    form = await request.formData();
+    form = await new Response(bytes, { headers: { 'content-type': contentType } }).formData();
   } catch {
     throw new ApiError('BAD_REQUEST', 'The form could not be read. Send it as application/x-www-form-urlencoded.');
   }
-  const fields: Record<string, string> = {};
+  const entries = new Map<string, string>();
   for (const [name, value] of form) {
     if (typeof value !== 'string') throw new ApiError('BAD_REQUEST', `The form field "${name}" must be text, not a file.`);
-    fields[name] = value;
+    if (entries.has(name)) {
+      throw new ApiError('VALIDATION_FAILED', 'A form field is sent more than once; see issues.', [
+        { path: name, message: `Send "${name}" once.` },
+      ]);
+    }
+    entries.set(name, value);
+  }
+  const fields = Object.fromEntries(entries);
+  const issues = unstorableTextIssues(fields);
+  if (issues.length > 0) {
+    throw new ApiError('VALIDATION_FAILED', 'Some text in the form cannot be stored; see issues for each field.', issues);
   }
   return validBody(schema, fields);
 }

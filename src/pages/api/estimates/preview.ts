@@ -1,6 +1,7 @@
 import { estimatePreviewSchema } from '../../../lib/contracts/estimates';
 import { previewInWorker } from '../../../lib/server/estimates/preview-service';
 import { requirePermission } from '../../../lib/server/http/guards';
+import { BODY_LIMIT_BYTES } from '../../../lib/server/http/read-body';
 import { handleApi, jsonText, readJsonBody } from '../../../lib/server/http/respond';
 
 export const prerender = false;
@@ -13,6 +14,6 @@ export const prerender = false;
  */
 export const POST = handleApi(async (context) => {
   await requirePermission(context, 'estimate', 'create');
-  const input = await readJsonBody(context.request, estimatePreviewSchema);
+  const input = await readJsonBody(context.request, estimatePreviewSchema, BODY_LIMIT_BYTES.estimate);
   return jsonText(await previewInWorker(input, context.request.signal));
 });

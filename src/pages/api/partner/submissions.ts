@@ -5,8 +5,9 @@ import { submitUpload } from '../../../lib/server/contribute/submit-upload';
 import { sha256Of } from '../../../lib/server/contribute/upload-request';
 import { keyContributorOf } from '../../../lib/server/http/acting';
 import { ApiError } from '../../../lib/server/http/api-error';
-import { handleApi, json, readJsonBody } from '../../../lib/server/http/respond';
-import { refuseOversizedBody } from '../../../lib/server/http/upload-reader';
+import { BODY_LIMIT_BYTES, readBodyBytes, requireStorableText } from '../../../lib/server/http/read-body';
+import { handleApi, json, parseJsonBody } from '../../../lib/server/http/respond';
+import { MAX_UPLOAD_BYTES } from '../../../lib/server/http/upload-reader';
 
 export const prerender = false;
 
@@ -32,7 +33,6 @@ function delimiterFrom(url: URL) {
  */
 export const POST = handleApi(async (context, app) => {
   const caller = await authenticateFirmKey(app.auth, context.request.headers);
-  refuseOversizedBody(context.request);
   const type = (context.request.headers.get('content-type') ?? '').toLowerCase();
   const isJson = type.includes('application/json');
   if (!isJson && !type.includes('text/csv')) {
@@ -41,16 +41,23 @@ export const POST = handleApi(async (context, app) => {
       'Send Content-Type: text/csv (a CSV file as the body) or application/json ({ "rows": [...] }).',
     );
   }
-  const bytes = new Uint8Array(await context.request.clone().arrayBuffer());
-  const body = isJson ? await readJsonBody(context.request, partnerJsonUploadSchema) : null;
+  const bytes = await readBodyBytes(context.request, isJson ? BODY_LIMIT_BYTES.partnerRows : MAX_UPLOAD_BYTES);
+  const body = isJson ? parseJsonBody(bytes, partnerJsonUploadSchema) : null;
   const delimiter = delimiterFrom(context.url);
-  const fileName = body?.fileName ?? context.url.searchParams.get('fileName') ?? (body ? 'api-upload.json' : 'api-upload.csv');
+  const fileName =
+    body?.fileName ??
+    requireStorableText(context.url.searchParams.get('fileName'), 'fileName') ??
+    (body ? 'api-upload.json' : 'api-upload.csv');
   const upload = {
     bytes,
     fileName,
     mediaType: body ? 'application/json' : 'text/csv',
     sha256: sha256Of(bytes),
-    options: { format: 'csv' as const, delimiter, region: context.url.searchParams.get('region') ?? undefined },
+    options: {
+      format: 'csv' as const,
+      delimiter,
+      region: requireStorableText(context.url.searchParams.get('region') ?? undefined, 'region'),
+    },
   };
   const rawRows = body?.rows.map((values, index) => ({ row: index + 1, values }));
   const submission = await submitUpload(app, keyContributorOf(context, caller), upload, 'api', rawRows);

@@ -3,6 +3,7 @@ import { changeMemberRole, removeMember } from '../../../../lib/server/firms/fir
 import { firmCallerOf } from '../../../../lib/server/http/acting';
 import { activeFirmId, requirePermission } from '../../../../lib/server/http/guards';
 import { authIdParam, readParams } from '../../../../lib/server/http/params';
+import { readEmptyBody } from '../../../../lib/server/http/read-body';
 import { handleApi, json, readJsonBody } from '../../../../lib/server/http/respond';
 
 export const prerender = false;
@@ -21,6 +22,7 @@ export const PATCH = handleApi(async (context, app) => {
 export const DELETE = handleApi(async (context, app) => {
   const identity = await requirePermission(context, 'firm', 'manage-members');
   const { memberId } = readParams(context, params);
+  await readEmptyBody(context.request);
   await removeMember(app, firmCallerOf(context, identity), activeFirmId(identity), memberId);
   return new Response(null, { status: 204 });
 });
