@@ -1,12 +1,8 @@
 /**
- * CSV text for chart data. A text cell that a spreadsheet would read as a formula (starting with
- * = + - @, a tab or a line break) is prefixed with an apostrophe; numbers are written as numbers.
- * Source: OWASP, "CSV Injection". One helper, to be swapped for the import core's neutraliseCell once
- * it is on main.
+ * CSV text for chart data: text cells go through the import core's neutraliseCell (a cell a spreadsheet
+ * would run as a formula gets a leading apostrophe); numbers are written as numbers.
  */
-export function neutraliseCell(text: string): string {
-  return /^[=+\-@\t\r\n]/.test(text) ? `'${text}` : text;
-}
+import { neutraliseCell } from '../../lib/import/formula-text';
 
 function cell(value: string | number | null | undefined): string {
   if (value === null || value === undefined) return '';
