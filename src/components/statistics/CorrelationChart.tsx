@@ -180,15 +180,19 @@ export default function CorrelationChart({ answers, colour, system, fileStem }: 
     yAxis: { type: pair.yScale === 'log' ? 'log' : 'value', name: y.title, nameLocation: 'middle', nameGap: 44, scale: true },
     series,
   };
-  const c = first.correlation;
-  const fit = c.pooled.released ? c.pooled.line?.fit : c.own?.line?.fit;
   const onLog = pair.yScale === 'log' ? ` (fitted on log10 ${y.symbol})` : '';
-  const counts = c.pooled.released
-    ? `${c.pooled.n} tests from ${c.pooled.firms} firms`
-    : `${c.own?.n ?? 0} tests of your firm only`;
-  const summary = fit
-    ? `${y.symbol} against ${x.symbol}: ${counts}. Ordinary least squares${onLog} in SI units: slope ${sig(fit.slope)} ± ${sig(fit.slopeStandardError)}, intercept ${sig(fit.intercept)} ± ${sig(fit.interceptStandardError)} (standard errors), r = ${sig(fit.r)}, R² = ${sig(fit.rSquared)}, residual sd ${sig(fit.residualSd)}. Dashed lines: ${percent} % confidence band; dotted: ${percent} % prediction band. ${c.published.length} published correlation(s) drawn in grey.`
-    : `${y.symbol} against ${x.symbol}: no line can be fitted to this selection (${counts}).`;
+  const describe = ({ label, answer }: UnitAnswer) => {
+    const c = answer.correlation;
+    const fit = c.pooled.released ? c.pooled.line?.fit : c.own?.line?.fit;
+    const counts = c.pooled.released
+      ? `${c.pooled.n} tests from ${c.pooled.firms} firms`
+      : `${c.own?.n ?? 0} tests of your firm only`;
+    const head = colour === 'unit' ? `${label}: ` : '';
+    return fit
+      ? `${head}${counts}; slope ${sig(fit.slope)} ± ${sig(fit.slopeStandardError)}, intercept ${sig(fit.intercept)} ± ${sig(fit.interceptStandardError)} (standard errors), r = ${sig(fit.r)}, R² = ${sig(fit.rSquared)}, residual sd ${sig(fit.residualSd)}.`
+      : `${head}${counts}; no line can be fitted.`;
+  };
+  const summary = `${y.symbol} against ${x.symbol}, ordinary least squares${onLog} in SI units. ${answers.map(describe).join(' ')} Dashed lines: ${percent} % confidence band; dotted: ${percent} % prediction band. ${first.correlation.published.length} published correlation(s) drawn in grey.`;
   const csv = () =>
     toCsv(['series', x.title, y.title, 'confidence low', 'confidence high', 'prediction low', 'prediction high'], csvRows);
   return (
