@@ -3,7 +3,7 @@ import node from '@astrojs/node';
 import react from '@astrojs/react';
 import tailwind from '@astrojs/tailwind';
 import { defineConfig, envField } from 'astro/config';
-import { previewWorker } from './src/integrations/preview-worker.mjs';
+import { workerEntries } from './src/integrations/worker-entries.mjs';
 
 // Every variable is a server secret so it is read when the server starts, not baked into the build:
 // one build runs anywhere, configured by its environment.
@@ -14,7 +14,7 @@ export default defineConfig({
   adapter: node({ mode: 'standalone' }),
   outDir: process.env.CLAYBANK_BUILD_DIR ?? './dist',
   server: { host: '127.0.0.1', port: 4321 },
-  integrations: [react(), tailwind({ applyBaseStyles: false, configFile: './src/styles/tailwind.config.mjs' }), previewWorker()],
+  integrations: [react(), tailwind({ applyBaseStyles: false, configFile: './src/styles/tailwind.config.mjs' }), workerEntries()],
   devToolbar: { enabled: false },
   // Origins are checked in src/middleware.ts against APP_URL, read at run time, so one build serves
   // any host name; Astro's own check compares with the Host header, which a proxy may rewrite.
@@ -35,6 +35,7 @@ export default defineConfig({
       MAIL_INBOX_URL: secret({ optional: true }),
       MEILISEARCH_URL: secret({ optional: true }),
       MEILISEARCH_KEY: secret({ optional: true }),
+      RECORD_KEY_SECRET: secret({ optional: true }),
     },
   },
   vite: {

@@ -12,7 +12,13 @@ declare namespace App {
 }
 
 declare module 'virtual:claybank/preview-worker' {
-  /** File URL of the preview worker entry (see src/integrations/preview-worker.mjs). */
+  /** File URL of the preview worker entry (see src/integrations/worker-entries.mjs). */
+  const url: string;
+  export default url;
+}
+
+declare module 'virtual:claybank/statistics-worker' {
+  /** File URL of the statistics worker entry (see src/integrations/worker-entries.mjs). */
   const url: string;
   export default url;
 }

@@ -18,11 +18,34 @@ function contributorOf(firmSlug: string): string {
   return person.email;
 }
 
-/** The firm's records in submissions of about 40, planted mistakes last (they stay waiting for review). */
+/** Records taken in turn from each geological unit, so every submission holds some of each. */
+function interleaveUnits(records: DemoRecord[]): DemoRecord[] {
+  const byUnit = new Map<string, DemoRecord[]>();
+  for (const record of records) {
+    const unit = record.geologicalUnit ?? '';
+    byUnit.set(unit, [...(byUnit.get(unit) ?? []), record]);
+  }
+  const queues = [...byUnit.values()];
+  const out: DemoRecord[] = [];
+  while (out.length < records.length) for (const queue of queues) if (queue.length) out.push(queue.shift() as DemoRecord);
+  return out;
+}
+
+/** Records that stay waiting for review in each firm's last submission, besides its planted mistakes. */
+const WAITING = 8;
+
+/**
+ * The firm's records in submissions of about 40, then a last, small submission that stays waiting for
+ * review: a few ordinary records and the planted mistakes. Units are interleaved, so that every
+ * submission holds a slice of every deposit and each deposit's published tests come from every firm
+ * that works in it (its pooled figures pass the disclosure rule).
+ */
 function batches(records: DemoRecord[]): DemoRecord[][] {
-  const ordered = [...records.filter((r) => !r.plantedOutlier), ...records.filter((r) => r.plantedOutlier)];
+  const ordinary = interleaveUnits(records.filter((r) => !r.plantedOutlier));
+  const waiting = [...ordinary.splice(Math.max(0, ordinary.length - WAITING)), ...records.filter((r) => r.plantedOutlier)];
   const out: DemoRecord[][] = [];
-  for (let i = 0; i < ordered.length; i += SUBMISSION_SIZE) out.push(ordered.slice(i, i + SUBMISSION_SIZE));
+  for (let i = 0; i < ordinary.length; i += SUBMISSION_SIZE) out.push(ordinary.slice(i, i + SUBMISSION_SIZE));
+  out.push(waiting);
   return out;
 }
 

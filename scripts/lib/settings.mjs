@@ -43,9 +43,9 @@ export function localSecrets(folder = dataDir) {
   const make = () => randomBytes(24).toString('base64url');
   if (existsSync(file)) {
     const saved = JSON.parse(readFileSync(file, 'utf8'));
-    if (saved.searchKey) return saved;
-    // Files written before the search fake existed get its key added.
-    const withKey = { ...saved, searchKey: make() };
+    if (saved.searchKey && saved.recordKeySecret) return saved;
+    // Files written before the search fake or the statistics existed get their secrets added.
+    const withKey = { searchKey: make(), recordKeySecret: make() + make(), ...saved };
     writeFileSync(file, JSON.stringify(withKey, null, 2), { mode: 0o600 });
     return withKey;
   }
@@ -55,6 +55,7 @@ export function localSecrets(folder = dataDir) {
     pgAppPassword: make(),
     authSecret: make() + make(),
     searchKey: make(),
+    recordKeySecret: make() + make(),
   };
   writeFileSync(file, JSON.stringify(secrets, null, 2), { mode: 0o600 });
   return secrets;

@@ -223,6 +223,7 @@ export function appEnvironment({ port, appUrl, secrets, mail, search, mode = 'de
     APP_MODE: mode,
     DATABASE_URL: appUrl,
     BETTER_AUTH_SECRET: secrets.authSecret,
+    RECORD_KEY_SECRET: secrets.recordKeySecret,
     SMTP_URL: mail.smtpUrl,
     MAIL_INBOX_URL: mail.inboxUrl,
     ASTRO_TELEMETRY_DISABLED: '1',

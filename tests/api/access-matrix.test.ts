@@ -26,6 +26,8 @@ let unitId = '';
 const asObject = (result: CallResult) => result.body as Record<string, unknown>;
 const listOf = (result: CallResult, key: string) => asObject(result)[key] as Record<string, unknown>[];
 const ids = (result: CallResult, key: string) => listOf(result, key).map((row) => row.id);
+const statisticsOwn = (result: CallResult, parameter: string) =>
+  listOf(result, 'summaries').find((s) => s.parameter === parameter)?.own ?? null;
 
 const PREVIEW_BODY = {
   unitSystem: 'SI',
@@ -599,6 +601,45 @@ const MATRIX: Record<string, Case[]> = {
       expect: everyone(201),
     },
   ],
+  'GET /api/statistics': [
+    {
+      context: "matrix unit: published tests of every firm plus own firm's, own figures only to members",
+      request: get(() => '/api/statistics?unit=aa-access-matrix-clay'),
+      expect: everyone(
+        { status: 200, check: (r) => expect(statisticsOwn(r, 'compressionIndex')).not.toBeNull() },
+        {
+          anon: 401,
+          steward: { status: 200, check: (r) => expect(statisticsOwn(r, 'compressionIndex')).toBeNull() },
+          platformAdmin: { status: 200, check: (r) => expect(statisticsOwn(r, 'compressionIndex')).toBeNull() },
+        },
+      ),
+    },
+  ],
+  'GET /api/statistics/correlation': [
+    {
+      context: 'matrix unit, Cc–LL',
+      request: get(() => '/api/statistics/correlation?unit=aa-access-matrix-clay&pair=cc-ll'),
+      expect: everyone(200, { anon: 401 }),
+    },
+  ],
+  'GET /api/statistics/profile': [
+    {
+      context: 'matrix unit',
+      request: get(() => '/api/statistics/profile?unit=aa-access-matrix-clay'),
+      expect: everyone(200, { anon: 401 }),
+    },
+  ],
+  'POST /api/statistics/compare': [
+    {
+      context: 'matrix unit, one site value',
+      request: () => ({
+        method: 'POST',
+        path: '/api/statistics/compare?unit=aa-access-matrix-clay',
+        body: { values: { compressionIndex: [0.9] } },
+      }),
+      expect: everyone(200, { anon: 401 }),
+    },
+  ],
   'GET /api/audit': [
     {
       context: 'own firm; platform admin sees all',
@@ -728,6 +769,9 @@ const PAGES: Record<string, string> = {
   'PAGE /': '/',
   'PAGE /404': '/404',
   'PAGE /bank': '/bank',
+  'PAGE /bank/deposits': '/bank/deposits',
+  'PAGE /bank/deposits/:slug': '/bank/deposits/saltreach-estuarine-clay',
+  'PAGE /bank/statistics': '/bank/statistics?unit=saltreach-estuarine-clay',
   'PAGE /contribute': '/contribute',
   'PAGE /review': '/review',
   'PAGE /estimates': '/estimates',
@@ -769,6 +813,9 @@ const PAGE_EXPECTATIONS: Record<string, Record<Role, Expectation>> = {
   'PAGE /admin/firms': signedInPage('/admin/firms'),
   'PAGE /admin/versions': signedInPage('/admin/versions'),
   'PAGE /admin/settings': signedInPage('/admin/settings'),
+  'PAGE /bank/deposits': signedInPage('/bank/deposits'),
+  'PAGE /bank/deposits/:slug': signedInPage('/bank/deposits/saltreach-estuarine-clay'),
+  'PAGE /bank/statistics': everyone(200, { anon: 302 }),
   'PAGE /audit': everyone(
     { status: 200, privateMarkersOnly: true },
     { anon: { status: 302, check: (r) => expect(r.location).toBe('/sign-in?next=/audit') } },

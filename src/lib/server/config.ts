@@ -7,6 +7,7 @@ import {
   MAIL_INBOX_URL,
   MEILISEARCH_KEY,
   MEILISEARCH_URL,
+  RECORD_KEY_SECRET,
   SMTP_URL,
 } from 'astro:env/server';
 
@@ -21,4 +22,6 @@ export const config = {
   mailInboxUrl: MAIL_INBOX_URL ?? null,
   meilisearchUrl: MEILISEARCH_URL ?? null,
   meilisearchKey: MEILISEARCH_KEY ?? null,
+  /** Secret of the records' masking keys for pooled statistics; long-lived, never rotated. */
+  recordKeySecret: RECORD_KEY_SECRET ?? null,
 } as const;

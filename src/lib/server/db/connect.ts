@@ -1,5 +1,6 @@
 import { Kysely, PostgresDialect } from 'kysely';
 import pg from 'pg';
+import Cursor from 'pg-cursor';
 import type { Database } from './schema';
 
 // numeric and bigint arrive from pg as strings; the bank stores engineering values as numeric
@@ -25,5 +26,6 @@ export function connectDatabase(connectionString: string, options: { max?: numbe
   // A connection that breaks while checked out also emits 'error'; the query in flight already fails
   // with it, so log it here instead of letting it crash the process.
   pool.on('connect', (client) => client.on('error', (error) => console.error(`[db] connection lost: ${error.message}`)));
-  return { db: new Kysely<Database>({ dialect: new PostgresDialect({ pool }) }), pool };
+  // The cursor lets a repository stream a large result (`.stream()`) instead of holding every row at once.
+  return { db: new Kysely<Database>({ dialect: new PostgresDialect({ pool, cursor: Cursor }) }), pool };
 }

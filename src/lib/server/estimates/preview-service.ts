@@ -1,6 +1,6 @@
 /**
  * The process-wide preview pool, started on first use. The worker entry's location comes from the
- * build (src/integrations/preview-worker.mjs): the bundled preview-worker.mjs beside the server
+ * build (src/integrations/worker-entries.mjs): the bundled preview-worker.mjs beside the server
  * code in a built app, the tsx loader under `astro dev`.
  */
 import previewWorkerUrl from 'virtual:claybank/preview-worker';

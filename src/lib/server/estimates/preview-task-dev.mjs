@@ -1,5 +1,5 @@
 // Worker entry for `astro dev` and the tests: loads the TypeScript task through tsx. Built apps use
-// the bundled preview-worker.mjs instead (src/integrations/preview-worker.mjs).
+// the bundled preview-worker.mjs instead (src/integrations/worker-entries.mjs).
 import { tsImport } from 'tsx/esm/api';
 
 const task = await tsImport('./preview-task.ts', import.meta.url);

@@ -2,7 +2,7 @@
  * The preview as a worker-thread task: the engine runs here, off the server's event loop, and the
  * result leaves as JSON text so the main thread neither clones nor serialises the large result.
  * This module is the entry of the worker bundle (`preview-worker.mjs`, see
- * src/integrations/preview-worker.mjs); in development and tests it is loaded through tsx.
+ * src/integrations/worker-entries.mjs); in development and tests it is loaded through tsx.
  */
 import { EngineInputError, type InputIssue, previewEstimate } from '../../consolidation';
 import type { EstimatePreviewInput } from '../../schemas/estimate-preview';
