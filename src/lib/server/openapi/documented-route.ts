@@ -12,6 +12,7 @@ export type RouteTag =
   | 'Submissions'
   | 'Review'
   | 'Estimates'
+  | 'Statistics'
   | 'Admin'
   | 'Service';
 

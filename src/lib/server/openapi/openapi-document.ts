@@ -5,9 +5,15 @@ import type { DocumentedRoute } from './documented-route';
 import { ACCOUNT_ROUTES } from './routes-account';
 import { ADMIN_ROUTES } from './routes-admin';
 import { BANK_ROUTES } from './routes-bank';
+import { STATISTICS_ROUTES } from './routes-statistics';
 
 /** Every endpoint the description documents, in the order the API page shows them. */
-export const DOCUMENTED_ROUTES: readonly DocumentedRoute[] = [...BANK_ROUTES, ...ACCOUNT_ROUTES, ...ADMIN_ROUTES];
+export const DOCUMENTED_ROUTES: readonly DocumentedRoute[] = [
+  ...BANK_ROUTES,
+  ...STATISTICS_ROUTES,
+  ...ACCOUNT_ROUTES,
+  ...ADMIN_ROUTES,
+];
 
 const errorBodySchema = z
   .object({
